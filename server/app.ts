@@ -1,0 +1,99 @@
+import express, { type Request, type Response, type NextFunction } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import pino, { type Logger } from 'pino';
+import { rateLimit } from 'express-rate-limit';
+import { existsSync } from 'node:fs';
+import { resolve, join } from 'node:path';
+import type { Knex } from 'knex';
+import type { Config } from './config';
+import type { Deps } from './deps';
+import { createMailer, type Mailer } from './mail/mailer';
+import { createSessionMiddleware, configurePassport } from './auth/session';
+import { csrfGuard } from './auth/csrf';
+import { resolveAuth } from './auth/resolve-auth';
+import { PgRateLimitStore } from './auth/rate-limit-store';
+import { buildRouter } from './http/router';
+import { errorHandler } from './http/error-handler';
+import { errors } from './http/errors';
+import { buildOpenApi } from './http/openapi';
+import { routeTable } from './routes';
+
+export interface AppOptions {
+  db: Knex;
+  config: Config;
+  mailer?: Mailer;
+  logger?: Logger;
+}
+
+export interface FarthingApp {
+  app: express.Express;
+  deps: Deps;
+  close(): Promise<void>;
+}
+
+/** Builds the whole HTTP app without listening, so tests drive it in-process. */
+export function createApp(opts: AppOptions): FarthingApp {
+  const { db, config } = opts;
+  const logger =
+    opts.logger ??
+    pino({
+      level: config.LOG_LEVEL,
+      redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]', '*.password', '*.token'], censor: '[hidden]' },
+    });
+  const mailer = opts.mailer ?? createMailer(config);
+  const deps: Deps = { db, config, mailer, logger };
+  const passport = configurePassport(db);
+  const sessions = createSessionMiddleware(config);
+  const routes = routeTable(passport);
+  const openapi = buildOpenApi(routes);
+
+  const authLimiter = rateLimit({
+    windowMs: 60_000,
+    limit: config.RATE_LIMIT_AUTH_PER_MINUTE,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    store: new PgRateLimitStore(db, 'auth:'),
+    handler: (_req, _res, next) => next(errors.rateLimited()),
+  });
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.PUBLIC_URL.startsWith('https://')) app.set('trust proxy', 1);
+  app.use(helmet());
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ statusCode: res.statusCode }) },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb', strict: true }));
+  api.use(sessions.middleware);
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(csrfGuard(['/billing/webhook']));
+  api.use(resolveAuth(db));
+  api.get('/openapi.json', (_req, res) => res.json(openapi));
+  app.use('/api', api);
+  app.use(buildRouter(routes, deps, { auth: authLimiter }));
+  app.use('/api', (_req: Request, _res: Response, next: NextFunction) => next(errors.notFound('API route')));
+
+  const dist = resolve(config.CLIENT_DIST);
+  if (config.SERVE_CLIENT && existsSync(join(dist, 'index.html'))) {
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(join(dist, 'index.html')));
+  }
+  app.use(errorHandler(logger));
+
+  return {
+    app,
+    deps,
+    close: async () => {
+      await sessions.close();
+      mailer.close();
+    },
+  };
+}

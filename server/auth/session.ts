@@ -1,0 +1,57 @@
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import pg from 'pg';
+import type { Knex } from 'knex';
+import type { Config } from '../config';
+import { usersRepo } from './repository';
+import { verifyPassword, dummyHash } from './passwords';
+
+const PgStore = connectPgSimple(session);
+
+/** Sessions live in PostgreSQL so any app server can serve any request. */
+export function createSessionMiddleware(config: Config) {
+  const pool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 5000 });
+  // An idle client that loses its server (the database restarted) must not crash the process.
+  pool.on('error', () => undefined);
+  const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: config.NODE_ENV === 'test' ? false : 15 * 60 });
+  const secure = config.PUBLIC_URL.startsWith('https://');
+  const middleware = session({
+    name: 'farthing.sid',
+    store,
+    secret: config.SESSION_SECRET,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    proxy: secure,
+    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: 14 * 24 * 3600 * 1000 },
+  });
+  return {
+    middleware,
+    close: async () => {
+      store.close();
+      await pool.end();
+    },
+  };
+}
+
+/** passport-local with the e-mail as user name; the session keeps only the user id. */
+export function configurePassport(db: Knex): passport.PassportStatic {
+  const instance = new passport.Passport() as unknown as passport.PassportStatic;
+  instance.use(
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
+      usersRepo
+        .byEmail(db, email.trim().toLowerCase())
+        .then(async (user) => {
+          // Compare against a dummy hash for unknown e-mails so the timing does not tell.
+          const ok = await verifyPassword(password, user?.passwordHash ?? dummyHash);
+          done(null, user && ok ? { id: user.id } : false);
+        })
+        .catch(done);
+    }),
+  );
+  instance.serializeUser((user, done) => done(null, (user as { id: string }).id));
+  instance.deserializeUser((id: string, done) => done(null, { id }));
+  return instance;
+}

@@ -1,0 +1,33 @@
+import { z } from 'zod';
+
+/**
+ * Every setting comes from the environment, validated once at start-up; a bad value
+ * stops the server with one message listing every problem.
+ */
+const schema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  DATABASE_URL: z.string().url(),
+  PORT: z.coerce.number().int().min(0).max(65535).default(4100),
+  HOST: z.string().default('127.0.0.1'),
+  PUBLIC_URL: z.string().url().default('http://127.0.0.1:4100'),
+  SESSION_SECRET: z.string().min(16, 'must be at least 16 characters'),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  MAIL_FROM: z.string().default('Farthing <no-reply@farthing.local>'),
+  SERVE_CLIENT: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  CLIENT_DIST: z.string().default('dist'),
+  RATE_LIMIT_AUTH_PER_MINUTE: z.coerce.number().int().min(1).default(20),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  DEV_INBOX_URL: z.string().url().optional(),
+});
+
+export type Config = z.infer<typeof schema>;
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = schema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Farthing cannot start; fix these settings:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}

@@ -1,0 +1,46 @@
+import knex, { type Knex } from 'knex';
+import pg from 'pg';
+
+// Calendar dates stay 'YYYY-MM-DD' strings (no time-zone shift); numeric and bigint
+// already arrive as strings, which keeps money exact and ids opaque.
+pg.types.setTypeParser(1082, (v: string) => v);
+
+const camelToSnake = (s: string) => s.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
+const snakeToCamel = (s: string) => s.replace(/_([a-z0-9])/g, (_, c: string) => c.toUpperCase());
+
+function camelizeRow(row: unknown): unknown {
+  if (Array.isArray(row)) return row.map(camelizeRow);
+  if (row && typeof row === 'object' && !(row instanceof Date) && !Buffer.isBuffer(row)) {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(row)) out[snakeToCamel(k)] = v;
+    return out;
+  }
+  return row;
+}
+
+/**
+ * The one place where the database's snake_case meets the API's camelCase: identifiers
+ * written in camelCase in query builders become snake_case, and result rows come back
+ * camelCased (top level keys only; JSON columns keep their own keys).
+ */
+export function createDb(connectionString: string, overrides: Partial<Knex.Config> = {}): Knex {
+  return knex({
+    client: 'pg',
+    connection: { connectionString, application_name: 'farthing' },
+    pool: { min: 0, max: 10 },
+    acquireConnectionTimeout: 5000,
+    wrapIdentifier: (value, origImpl) => origImpl(value === '*' ? value : camelToSnake(value)),
+    postProcessResponse: (result) => {
+      if (Array.isArray(result)) return result.map(camelizeRow);
+      if (result && typeof result === 'object' && 'rows' in result && Array.isArray(result.rows)) {
+        return { ...result, rows: result.rows.map(camelizeRow) };
+      }
+      return camelizeRow(result);
+    },
+    ...overrides,
+  });
+}
+
+export type Db = Knex;
+export type Trx = Knex.Transaction;
+export type DbOrTrx = Knex | Knex.Transaction;

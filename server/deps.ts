@@ -1,0 +1,12 @@
+import type { Knex } from 'knex';
+import type { Logger } from 'pino';
+import type { Config } from './config';
+import type { Mailer } from './mail/mailer';
+
+/** What every route and service may use; built once in createApp. */
+export interface Deps {
+  db: Knex;
+  config: Config;
+  mailer: Mailer;
+  logger: Logger;
+}

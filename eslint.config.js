@@ -4,7 +4,7 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', '.data', 'test-artifacts', 'coverage'] },
+  { ignores: ['dist', 'node_modules', '.data', 'test-artifacts', 'coverage', '**/.scratch'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -9,6 +9,7 @@ import { prepareDatabase } from './lib/database';
 import { createDb } from '../server/db/knex';
 import { migrateLatest, seedConfig } from '../server/db/migrate';
 import { startMailSink } from '../server/mail/sink';
+import { startS3Fake } from '../server/files/s3-fake';
 import { demoLogins, demoPassword } from '../seeds/01_demo_workspace';
 
 const dev = process.argv.includes('--dev');
@@ -29,6 +30,7 @@ async function main() {
   const database = prepareDatabase({ folder: 'pg', port: Number(process.env.FARTHING_PG_PORT ?? 54329), database: 'farthing', log });
   const children: ChildProcess[] = [];
   let sink: Awaited<ReturnType<typeof startMailSink>> | null = null;
+  let s3: Awaited<ReturnType<typeof startS3Fake>> | null = null;
   let stopping = false;
   const stopAll = async (code = 0) => {
     if (stopping) return;
@@ -37,6 +39,7 @@ async function main() {
     for (const c of children) c.kill('SIGTERM');
     await Promise.all(children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)));
     await sink?.close();
+    await s3?.close();
     database.stop();
     log('stopped.');
     process.exit(code);
@@ -52,6 +55,8 @@ async function main() {
     await db.destroy();
 
     sink = await startMailSink({ smtpPort, httpPort: inboxPort });
+    // Datasheets go to the local S3-compatible store unless a real one is configured.
+    if (!process.env.S3_ENDPOINT) s3 = await startS3Fake({ port: Number(process.env.S3_PORT ?? 4102), directory: '.data/s3', bucket: 'farthing' });
     const publicUrl = process.env.PUBLIC_URL ?? (dev ? 'http://127.0.0.1:5173' : `http://127.0.0.1:${port}`);
     const env = {
       ...process.env,
@@ -61,6 +66,7 @@ async function main() {
       PUBLIC_URL: publicUrl,
       SESSION_SECRET: sessionSecret(),
       SMTP_PORT: String(sink.smtpPort),
+      S3_ENDPOINT: process.env.S3_ENDPOINT ?? `http://127.0.0.1:${s3!.port}`,
       SERVE_CLIENT: dev ? 'false' : 'true',
       LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
     };

@@ -18,12 +18,14 @@ import { errorHandler } from './http/error-handler';
 import { errors } from './http/errors';
 import { buildOpenApi } from './http/openapi';
 import { routeTable } from './routes';
+import { createObjectStore, type ObjectStore } from './files/object-store';
 
 export interface AppOptions {
   db: Knex;
   config: Config;
   mailer?: Mailer;
   logger?: Logger;
+  store?: ObjectStore;
 }
 
 export interface FarthingApp {
@@ -42,9 +44,12 @@ export function createApp(opts: AppOptions): FarthingApp {
       redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]', '*.password', '*.token'], censor: '[hidden]' },
     });
   const mailer = opts.mailer ?? createMailer(config);
-  const deps: Deps = { db, config, mailer, logger };
+  const store =
+    opts.store ??
+    createObjectStore({ endpoint: config.S3_ENDPOINT, region: config.S3_REGION, bucket: config.S3_BUCKET, accessKeyId: config.S3_ACCESS_KEY_ID, secretAccessKey: config.S3_SECRET_ACCESS_KEY });
+  const deps: Deps = { db, config, mailer, logger, store };
   const passport = configurePassport(db);
-  const sessions = createSessionMiddleware(config);
+  const sessions = createSessionMiddleware(config, logger);
   const routes = routeTable(passport);
   const openapi = buildOpenApi(routes);
 

@@ -19,6 +19,13 @@ const schema = z.object({
   RATE_LIMIT_AUTH_PER_MINUTE: z.coerce.number().int().min(1).default(20),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DEV_INBOX_URL: z.string().url().optional(),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().min(3).default('farthing'),
+  S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+  MAX_DATASHEET_MB: z.coerce.number().min(1).max(200).default(20),
+  MAX_IMPORT_MB: z.coerce.number().min(1).max(200).default(10),
 });
 
 export type Config = z.infer<typeof schema>;

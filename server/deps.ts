@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import type { Logger } from 'pino';
 import type { Config } from './config';
 import type { Mailer } from './mail/mailer';
+import type { ObjectStore } from './files/object-store';
 
 /** What every route and service may use; built once in createApp. */
 export interface Deps {
@@ -9,4 +10,5 @@ export interface Deps {
   config: Config;
   mailer: Mailer;
   logger: Logger;
+  store: ObjectStore;
 }

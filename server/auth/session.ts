@@ -4,6 +4,7 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import pg from 'pg';
 import type { Knex } from 'knex';
+import type { Logger } from 'pino';
 import type { Config } from '../config';
 import { usersRepo } from './repository';
 import { verifyPassword, dummyHash } from './passwords';
@@ -11,11 +12,16 @@ import { verifyPassword, dummyHash } from './passwords';
 const PgStore = connectPgSimple(session);
 
 /** Sessions live in PostgreSQL so any app server can serve any request. */
-export function createSessionMiddleware(config: Config) {
+export function createSessionMiddleware(config: Config, logger: Logger) {
   const pool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 5000 });
   // An idle client that loses its server (the database restarted) must not crash the process.
   pool.on('error', () => undefined);
-  const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: config.NODE_ENV === 'test' ? false : 15 * 60 });
+  const store = new PgStore({
+    pool,
+    tableName: 'session',
+    pruneSessionInterval: config.NODE_ENV === 'test' ? false : 15 * 60,
+    errorLog: (...args: unknown[]) => logger.warn({ detail: args.map(String).join(' ') }, 'session store error'),
+  });
   const secure = config.PUBLIC_URL.startsWith('https://');
   const middleware = session({
     name: 'farthing.sid',
@@ -31,7 +37,8 @@ export function createSessionMiddleware(config: Config) {
     middleware,
     close: async () => {
       store.close();
-      await pool.end();
+      // connect-pg-simple may already have ended the pool it was handed.
+      if (!(pool as pg.Pool & { ended?: boolean }).ended) await pool.end();
     },
   };
 }

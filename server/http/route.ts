@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import type { Action } from '../../src/shared/permissions';
 import type { Role } from '../../src/shared/schemas/common';
 import type { Deps } from '../deps';
+import type { UploadedFile } from './upload';
 
 /** Who is asking: a signed-in user acting in one workspace with one role. */
 export interface Auth {
@@ -30,6 +31,8 @@ export interface RouteContext<B, P, Q, A> {
   query: Q;
   auth: A;
   deps: Deps;
+  /** Multipart routes: the one uploaded file and the other form fields. */
+  upload: { file: UploadedFile; fields: Record<string, string> };
 }
 
 export interface RouteDef<
@@ -52,6 +55,8 @@ export interface RouteDef<
   rateLimit?: 'auth';
   /** Routes that read the raw body or a multipart upload set this; JSON parsing is skipped. */
   bodyKind?: 'json' | 'multipart' | 'raw';
+  /** For multipart routes: the largest file accepted (413 above it). */
+  maxUploadBytes?: number;
   handler: (
     ctx: RouteContext<Out<B>, Out<P>, Out<Q>, Acc extends 'public' ? Auth | null : Auth>,
   ) => Promise<unknown>;

@@ -4,6 +4,7 @@ import type { Deps } from '../deps';
 import { errors } from './errors';
 import type { RouteDef } from './route';
 import { parseInput } from './validate';
+import { readUpload } from './upload';
 
 type Middleware = (req: Request, res: Response, next: NextFunction) => void;
 
@@ -30,10 +31,12 @@ export function buildRouter(routes: RouteDef[], deps: Deps, limiters: { auth: Mi
         const params = def.params ? parseInput(def.params, req.params, 'params') : req.params;
         const query = def.query ? parseInput(def.query, req.query, 'query') : {};
         let body: unknown = undefined;
-        if (def.bodyKind === 'multipart' || def.bodyKind === 'raw') body = req.body;
+        let upload: Awaited<ReturnType<typeof readUpload>> | undefined;
+        if (def.bodyKind === 'multipart') upload = await readUpload(req, res, def.maxUploadBytes ?? 10 * 1024 * 1024);
+        else if (def.bodyKind === 'raw') body = req.body;
         else if (def.body) body = parseInput(def.body, req.body ?? {}, 'body');
         else if (hasBody(req.body)) throw errors.validation('This request takes no body.', [{ path: 'body', message: 'must be empty' }]);
-        const result = await def.handler({ req, res, body, params, query, auth, deps } as never);
+        const result = await def.handler({ req, res, body, params, query, auth, deps, upload } as never);
         if (res.headersSent) return;
         if (result === undefined) res.status(def.status ?? 204).end();
         else res.status(def.status ?? 200).json(result);

@@ -5,12 +5,17 @@ import { createApp, type FarthingApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { startMailSink, type MailSink } from '../../server/mail/sink';
 import { createTestDatabase, type TestDatabase } from './db';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { startS3Fake, type S3Fake } from '../../server/files/s3-fake';
 
 export interface TestApp {
   farthing: FarthingApp;
   config: Config;
   database: TestDatabase;
   sink: MailSink;
+  s3: S3Fake;
   /** A fresh cookie-keeping client that sends the header our CSRF rule asks for. */
   agent(): ReturnType<typeof request.agent>;
   close(): Promise<void>;
@@ -20,7 +25,10 @@ export interface TestApp {
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const database = await createTestDatabase();
   const sink = await startMailSink();
+  const s3Dir = mkdtempSync(join(tmpdir(), 'farthing-s3-'));
+  const s3 = await startS3Fake({ directory: s3Dir, bucket: 'farthing' });
   const config = loadConfig({
+    S3_ENDPOINT: `http://127.0.0.1:${s3.port}`,
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
     SESSION_SECRET: 'test-secret-test-secret',
@@ -37,10 +45,13 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     config,
     database,
     sink,
+    s3,
     agent: () => request.agent(farthing.app).set('X-Requested-With', 'farthing'),
     close: async () => {
       await farthing.close();
       await sink.close();
+      await s3.close();
+      rmSync(s3Dir, { recursive: true, force: true });
       await database.drop();
     },
   };

@@ -16,11 +16,13 @@ const adminUrl = () => {
 
 /** A fresh database cloned from the migrated template: real PostgreSQL, no mocks. */
 export async function createTestDatabase(): Promise<TestDatabase> {
-  const name = `t_${randomBytes(6).toString('hex')}`;
+  const template = process.env.FARTHING_TEST_TEMPLATE ?? 'missing_template';
+  // The run's pid (the template's suffix) lets a later run clean up after a crash.
+  const name = `t_${template.slice(4)}_${randomBytes(5).toString('hex')}`;
   const admin = createDb(adminUrl());
   for (let attempt = 0; ; attempt++) {
     try {
-      await admin.raw(`CREATE DATABASE "${name}" TEMPLATE farthing_template`);
+      await admin.raw(`CREATE DATABASE "${name}" TEMPLATE "${template}"`);
       break;
     } catch (err) {
       // Two clones at the same instant can collide on the template; try again shortly.

@@ -8,7 +8,6 @@ import { prepareDatabase, type PreparedDatabase } from '../../scripts/lib/databa
 import { createDb } from '../../server/db/knex';
 import { migrateLatest } from '../../server/db/migrate';
 
-export const templateName = 'farthing_template';
 let prepared: PreparedDatabase | null = null;
 
 export default async function setup(_project: TestProject): Promise<() => void> {
@@ -16,10 +15,14 @@ export default async function setup(_project: TestProject): Promise<() => void> 
   const { register } = await import('tsx/esm/api');
   const unregister = register();
   prepared = prepareDatabase({ folder: 'pg-test', port: Number(process.env.FARTHING_TEST_PG_PORT ?? 54339), database: 'postgres', log: () => undefined });
+  // Names carry this run's pid, so two runs on one cluster never collide.
+  const templateName = `tpl_${process.pid}`;
   const admin = createDb(prepared.url);
-  // Leftovers of an interrupted run: other test databases and an old template.
-  const { rows } = await admin.raw(`SELECT datname FROM pg_database WHERE datname LIKE 't\\_%' OR datname = ?`, [templateName]);
-  for (const r of rows as { datname: string }[]) await admin.raw(`DROP DATABASE IF EXISTS "${r.datname}" WITH (FORCE)`);
+  const { rows } = await admin.raw(`SELECT datname FROM pg_database WHERE datname ~ '^(t|tpl)_[0-9]+'`);
+  for (const { datname } of rows as { datname: string }[]) {
+    const pid = Number(/^(?:t|tpl)_(\d+)/.exec(datname)![1]);
+    if (!isAlive(pid)) await admin.raw(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`);
+  }
   await admin.raw(`CREATE DATABASE "${templateName}"`);
   await admin.destroy();
   const template = createDb(prepared.url.replace(/\/[^/]*$/, `/${templateName}`));
@@ -27,5 +30,21 @@ export default async function setup(_project: TestProject): Promise<() => void> 
   await template.destroy();
   await unregister();
   process.env.FARTHING_TEST_ADMIN_URL = prepared.url;
-  return () => prepared?.stop();
+  process.env.FARTHING_TEST_TEMPLATE = templateName;
+  return async () => {
+    const a = createDb(prepared!.url);
+    const { rows: mine } = await a.raw(`SELECT datname FROM pg_database WHERE datname ~ ?`, [`^(t|tpl)_${process.pid}(_|$)`]);
+    for (const { datname } of mine as { datname: string }[]) await a.raw(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`);
+    await a.destroy();
+    prepared?.stop();
+  };
+}
+
+function isAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch {
+    return false;
+  }
 }

@@ -1,0 +1,662 @@
+import { dec, Dec, decOr, moneyText, ONE, pctToFraction, perUnitText, ZERO } from './decimal';
+import { CostingInputError } from './errors';
+import type { DutyMatch } from './duty';
+import { createFxIndex, type FxIndex, type FxLookup } from './fx';
+import { needsAdder } from './incoterms';
+import { lineAdders, type LineAdders } from './landed';
+import { requiredQty } from './order-quantity';
+import { prepareProfile, type PreparedProfile } from './profile';
+import {
+  compareQuotes,
+  eligibilityReasons,
+  LandedFactors,
+  prepareQuote,
+  priceQuote,
+  supplierMap,
+  type PreparedQuote,
+  type PricedQuote,
+} from './quote-choice';
+import type {
+  BomLine,
+  CategoryTotal,
+  CostRollInput,
+  CostRollLine,
+  CostRollResult,
+  CurrencyCode,
+  FxRateUsed,
+  IneligibleReason,
+  IsoDate,
+  LeftOutReason,
+  LineWarning,
+  LineWarningCode,
+  Part,
+  RollWarning,
+  SupplierTotal,
+} from './types';
+
+interface PreparedLine {
+  /** Position in the input, to give lines back in the order they came. */
+  index: number;
+  line: BomLine;
+  qtyPerUnit: Dec;
+  /** The line's own attrition as a fraction, or null to fall back to the profile. */
+  attrition: Dec | null;
+  unitCost: Dec | null;
+  oneTimeCost: Dec | null;
+}
+
+interface QuoteSlot {
+  pq: PreparedQuote;
+  /** Eligibility on the costing date, FX aside (fixed for the roll, so computed once). */
+  reasons: IneligibleReason[];
+}
+
+type Converted = { ok: true; value: Dec; rows: FxRateUsed[] } | { ok: false; detail: string };
+
+/**
+ * Everything in a cost roll that does not depend on the build quantity, parsed and indexed
+ * once: the FX index, quotes grouped by part with their terms parsed and their eligibility
+ * on the costing date, duty rates, converted profile amounts. The volume curve reuses it
+ * for every quantity.
+ */
+export interface PreparedCostRoll {
+  date: IsoDate;
+  currency: CurrencyCode;
+  profile: PreparedProfile;
+  fx: FxIndex;
+  /** Lines sorted by id: sums run in this order, so the result never depends on input order. */
+  lines: PreparedLine[];
+  parts: ReadonlyMap<string, Part>;
+  quotesByPart: ReadonlyMap<string, QuoteSlot[]>;
+  quotesById: ReadonlyMap<string, QuoteSlot>;
+  factors: LandedFactors;
+  amortisationQty: Dec | null;
+  targetUnitCost: Dec | null;
+  /** freightPerShipment × shipments and feesPerShipment × shipments, in the reporting currency. */
+  freightPool: Converted;
+  feesPool: Converted;
+  assemblyRates: { ok: true; smt: Dec; tht: Dec; hand: Dec; rows: FxRateUsed[] } | { ok: false; detail: string };
+  /** Roll warnings that do not depend on the quantity. */
+  staticWarnings: RollWarning[];
+  /** Rate from a currency to the reporting currency on the costing date. */
+  toReporting(currency: CurrencyCode): FxLookup;
+}
+
+const fxDetail = (from: string, to: string, date: string) => `${from}->${to} ${date}`;
+
+function optionalDec(value: string | null | undefined, field: string): Dec | null {
+  return value === null || value === undefined || value === '' ? null : dec(value, field);
+}
+
+function convertAmount(fx: FxIndex, amount: Dec, from: CurrencyCode, to: CurrencyCode, date: IsoDate): Converted {
+  // Nothing to convert needs no rate (a profile without per-shipment amounts).
+  if (amount.isZero()) return { ok: true, value: ZERO, rows: [] };
+  const r = fx.lookup(from, to, date);
+  if (!r.ok) return { ok: false, detail: fxDetail(r.from, r.to, date) };
+  return { ok: true, value: amount.times(r.rate), rows: r.rows };
+}
+
+export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): PreparedCostRoll {
+  const { bom } = input;
+  const currency = bom.reportingCurrency.toUpperCase();
+  const date = bom.date;
+  const profile = prepareProfile(input.profile);
+  const fx = fxIndex ?? createFxIndex(input.fxRates, { pivot: input.pivot });
+  const suppliers = supplierMap(input.suppliers);
+  const parts = new Map(input.parts.map((p) => [p.id, p]));
+
+  const quotesByPart = new Map<string, QuoteSlot[]>();
+  const quotesById = new Map<string, QuoteSlot>();
+  input.quotes.forEach((q, i) => {
+    const pq = prepareQuote(q, suppliers, `quotes.${i}`);
+    const slot = { pq, reasons: eligibilityReasons(pq, date, profile.maxLeadTimeDays) };
+    let list = quotesByPart.get(q.partId);
+    if (!list) quotesByPart.set(q.partId, (list = []));
+    list.push(slot);
+    quotesById.set(q.id, slot);
+  });
+
+  const seen = new Set<string>();
+  const lines: PreparedLine[] = input.lines.map((line, index) => {
+    const f = `lines.${index}`;
+    if (seen.has(line.id)) throw new CostingInputError(`duplicate line id ${line.id}`, `${f}.id`);
+    seen.add(line.id);
+    const isPart = line.kind === 'part';
+    const qtyPerUnit = isPart ? dec(line.qtyPerUnit, `${f}.qtyPerUnit`) : decOr(line.qtyPerUnit, ONE, `${f}.qtyPerUnit`);
+    if (isPart && !qtyPerUnit.isPositive()) throw new CostingInputError('must be positive', `${f}.qtyPerUnit`);
+    return {
+      index,
+      line,
+      qtyPerUnit,
+      attrition: line.attritionPct === null || line.attritionPct === undefined || line.attritionPct === ''
+        ? null
+        : pctToFraction(line.attritionPct, `${f}.attritionPct`),
+      unitCost: optionalDec(line.unitCost, `${f}.unitCost`),
+      oneTimeCost: optionalDec(line.oneTimeCost, `${f}.oneTimeCost`),
+    };
+  });
+  lines.sort((a, b) => (a.line.id < b.line.id ? -1 : a.line.id > b.line.id ? 1 : 0));
+
+  const profileCurrency = (profile.currency ?? currency).toUpperCase();
+  const freightCurrency = (profile.freightCurrency ?? profileCurrency).toUpperCase();
+  const staticWarnings: RollWarning[] = [];
+  const freightPool = convertAmount(fx, profile.freightPerShipment.times(profile.shipments), freightCurrency, currency, date);
+  const feesPool = convertAmount(fx, profile.feesPerShipment.times(profile.shipments), profileCurrency, currency, date);
+  if (!freightPool.ok) staticWarnings.push({ code: 'missing_fx', detail: `freightPerShipment ${freightPool.detail}` });
+  if (!feesPool.ok) staticWarnings.push({ code: 'missing_fx', detail: `feesPerShipment ${feesPool.detail}` });
+  if (profile.shipments.isZero() && (!profile.freightPerShipment.isZero() || !profile.feesPerShipment.isZero())) {
+    staticWarnings.push({ code: 'shipments_zero', detail: 'per-shipment freight and fees are not charged' });
+  }
+
+  const rate = fx.lookup(profileCurrency, currency, date);
+  const hasRates = !(profile.smtRatePerPlacement.isZero() && profile.thtRatePerJoint.isZero() && profile.handRatePerOp.isZero());
+  let assemblyRates: PreparedCostRoll['assemblyRates'];
+  if (rate.ok) {
+    assemblyRates = {
+      ok: true,
+      smt: profile.smtRatePerPlacement.times(rate.rate),
+      tht: profile.thtRatePerJoint.times(rate.rate),
+      hand: profile.handRatePerOp.times(rate.rate),
+      rows: hasRates ? rate.rows : [],
+    };
+  } else if (hasRates) {
+    assemblyRates = { ok: false, detail: fxDetail(rate.from, rate.to, date) };
+    staticWarnings.push({ code: 'missing_fx', detail: `assembly rates ${assemblyRates.detail}` });
+  } else {
+    assemblyRates = { ok: true, smt: ZERO, tht: ZERO, hand: ZERO, rows: [] };
+  }
+
+  let amortisationQty: Dec | null = null;
+  if (bom.amortisationQty !== null && bom.amortisationQty !== undefined) {
+    amortisationQty = dec(bom.amortisationQty, 'bom.amortisationQty');
+    if (!amortisationQty.isInteger() || amortisationQty.lt(1)) throw new CostingInputError('must be a whole number ≥ 1', 'bom.amortisationQty');
+  }
+
+  const rates = new Map<string, FxLookup>();
+  const toReporting = (code: CurrencyCode): FxLookup => {
+    let r = rates.get(code);
+    if (!r) rates.set(code, (r = fx.lookup(code, currency, date)));
+    return r;
+  };
+
+  return {
+    date,
+    currency,
+    profile,
+    fx,
+    toReporting,
+    lines,
+    parts,
+    quotesByPart,
+    quotesById,
+    factors: new LandedFactors(profile),
+    amortisationQty,
+    targetUnitCost: optionalDec(bom.targetUnitCost, 'bom.targetUnitCost'),
+    freightPool,
+    feesPool,
+    assemblyRates,
+    staticWarnings,
+  };
+}
+
+// ---------------------------------------------------------------------------------------
+// One roll at one build quantity
+
+interface Work {
+  pl: PreparedLine;
+  status: 'costed' | 'dnp' | 'left_out';
+  leftOut?: { reason: LeftOutReason; detail?: string };
+  warnings: LineWarning[];
+  category: string;
+  part?: Part;
+  required?: Dec;
+  chosen?: PricedQuote;
+  duty?: DutyMatch;
+  excessQty?: Dec;
+  excessValue?: Dec;
+  weight?: Dec;
+  assemblyPerUnit: Dec;
+  costPerUnit?: Dec;
+  oneTimeCost?: Dec;
+  fxRows: FxRateUsed[];
+  // Filled in the second pass.
+  adders?: LineAdders;
+  assembly: Dec;
+  landed: Dec;
+}
+
+const PINNED_WARNING: Partial<Record<IneligibleReason, LineWarningCode>> = {
+  expired: 'pinned_expired',
+  not_yet_valid: 'pinned_not_yet_valid',
+  inactive_supplier: 'pinned_inactive_supplier',
+  lead_time: 'pinned_lead_time',
+};
+
+function leaveOut(w: Work, reason: LeftOutReason, detail?: string): Work {
+  w.status = 'left_out';
+  w.leftOut = { reason, detail };
+  w.warnings.push(detail ? { code: reason, detail } : { code: reason });
+  return w;
+}
+
+function costCostLine(p: PreparedCostRoll, w: Work): Work {
+  const { pl } = w;
+  if (pl.unitCost === null && pl.oneTimeCost === null) return leaveOut(w, 'no_cost');
+  const from = (pl.line.currency ?? p.currency).toUpperCase();
+  const rate = p.toReporting(from);
+  if (!rate.ok) return leaveOut(w, 'missing_fx', fxDetail(rate.from, rate.to, p.date));
+  w.fxRows = rate.rows;
+  w.costPerUnit = pl.unitCost === null ? ZERO : pl.unitCost.times(pl.qtyPerUnit).times(rate.rate);
+  w.oneTimeCost = pl.oneTimeCost === null ? ZERO : pl.oneTimeCost.times(rate.rate);
+  return w;
+}
+
+function weightNeeded(p: PreparedCostRoll): boolean {
+  return p.profile.freightBasis === 'weight' && !p.profile.freightPerShipment.times(p.profile.shipments).isZero();
+}
+
+function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
+  const { pl } = w;
+  const part = pl.line.partId ? p.parts.get(pl.line.partId) : undefined;
+  if (!part) return leaveOut(w, 'no_part', pl.line.partId ?? undefined);
+  w.part = part;
+  w.category = part.category;
+  const attrition = pl.attrition ?? p.profile.attrition.get(part.category) ?? ZERO;
+  const required = requiredQty(pl.qtyPerUnit, buildQty, attrition);
+  w.required = required;
+  const duty = p.profile.duty.match(part.hsCode);
+  w.duty = duty;
+
+  // The cheapest eligible quote as the quote board ranks it.
+  let best: PricedQuote | undefined;
+  let fxMissing: string | undefined;
+  const slots = p.quotesByPart.get(part.id) ?? [];
+  const fxFor = p.toReporting;
+  for (const slot of slots) {
+    if (slot.reasons.length > 0) continue;
+    const rate = fxFor(slot.pq.quote.currency);
+    if (!rate.ok) {
+      fxMissing ??= fxDetail(rate.from, rate.to, p.date);
+      continue;
+    }
+    const priced = priceQuote(slot.pq, required, rate, duty, p.factors);
+    if (!best || compareQuotes(priced, best) < 0) best = priced;
+  }
+
+  let chosen = best;
+  const pinnedId = pl.line.pinnedQuoteId;
+  if (pinnedId) {
+    const slot = p.quotesById.get(pinnedId);
+    if (!slot || slot.pq.quote.partId !== part.id) {
+      w.warnings.push({ code: 'pinned_not_found', detail: pinnedId });
+    } else {
+      const rate = fxFor(slot.pq.quote.currency);
+      if (!rate.ok) return leaveOut(w, 'missing_fx', fxDetail(rate.from, rate.to, p.date));
+      const pinned = priceQuote(slot.pq, required, rate, duty, p.factors);
+      for (const r of slot.reasons) {
+        const code = PINNED_WARNING[r];
+        if (code) w.warnings.push({ code });
+      }
+      const noLongerValid = slot.reasons.includes('expired') || slot.reasons.includes('not_yet_valid');
+      if (!noLongerValid && best && best.pq !== slot.pq && best.boardLanded.lt(pinned.boardLanded)) {
+        w.warnings.push({ code: 'pinned_not_cheapest', detail: best.pq.quote.id });
+      }
+      chosen = pinned;
+    }
+  }
+
+  if (!chosen) return fxMissing ? leaveOut(w, 'missing_fx', fxMissing) : leaveOut(w, 'no_quote');
+  w.chosen = chosen;
+  w.fxRows = chosen.fx.rows;
+
+  if (weightNeeded(p) && needsAdder(chosen.pq.incoterm, 'freight')) {
+    if (part.unitWeightG === null || part.unitWeightG === undefined || part.unitWeightG === '') {
+      return leaveOut(w, 'missing_weight', part.id);
+    }
+    w.weight = chosen.order.orderQty.times(dec(part.unitWeightG, `parts.${part.id}.unitWeightG`));
+  }
+
+  if (p.assemblyRates.ok) {
+    const r = p.assemblyRates;
+    const q = pl.qtyPerUnit;
+    if (part.mount === 'smt') w.assemblyPerUnit = q.times(r.smt);
+    else if (part.mount === 'hand') w.assemblyPerUnit = q.times(r.hand);
+    else if (part.mount === 'tht') {
+      if (part.pins === null || part.pins === undefined) {
+        if (!r.tht.isZero()) w.warnings.push({ code: 'missing_pins', detail: part.id });
+      } else {
+        w.assemblyPerUnit = q.times(dec(part.pins, `parts.${part.id}.pins`)).times(r.tht);
+      }
+    }
+  }
+  return w;
+}
+
+interface Sums {
+  goods: Dec;
+  excessValue: Dec;
+  origin: Dec;
+  freight: Dec;
+  insurance: Dec;
+  duty: Dec;
+  fees: Dec;
+  destination: Dec;
+  assembly: Dec;
+  landed: Dec;
+  count: number;
+}
+
+const emptySums = (): Sums => ({
+  goods: ZERO,
+  excessValue: ZERO,
+  origin: ZERO,
+  freight: ZERO,
+  insurance: ZERO,
+  duty: ZERO,
+  fees: ZERO,
+  destination: ZERO,
+  assembly: ZERO,
+  landed: ZERO,
+  count: 0,
+});
+
+// Zero terms are common (adders an Incoterm does not need); skipping them saves allocations.
+const add = (a: Dec, b: Dec): Dec => (b.isZero() ? a : a.plus(b));
+
+function addLine(s: Sums, w: Work): void {
+  const a = w.adders;
+  if (a) {
+    s.goods = add(s.goods, w.chosen!.goods);
+    s.excessValue = add(s.excessValue, w.excessValue!);
+    s.origin = add(s.origin, a.origin);
+    s.freight = add(s.freight, a.freight);
+    s.insurance = add(s.insurance, a.insurance);
+    s.duty = add(s.duty, a.duty);
+    s.fees = add(s.fees, a.fees);
+    s.destination = add(s.destination, a.destination);
+  }
+  s.assembly = add(s.assembly, w.assembly);
+  s.landed = add(s.landed, w.landed);
+  s.count += 1;
+}
+
+function addSums(into: Sums, s: Sums): void {
+  for (const k of ['goods', 'excessValue', 'origin', 'freight', 'insurance', 'duty', 'fees', 'destination', 'assembly', 'landed'] as const) {
+    into[k] = add(into[k], s[k]);
+  }
+  into.count += s.count;
+}
+
+/**
+ * Shares a per-build pool over the carrying lines in proportion to a key (goods value or
+ * weight). Returns null when there is nothing to share. A zero key total falls back to
+ * goods value, then to equal shares, so the pool is never dropped silently.
+ */
+function sharePool(
+  pool: Dec,
+  carriers: Work[],
+  key: (w: Work) => Dec,
+  warnings: RollWarning[],
+  zeroKeyCode: RollWarning['code'] | null,
+): Map<Work, Dec> | null {
+  if (pool.isZero() || carriers.length === 0) return null;
+  let keyOf = key;
+  let total = carriers.reduce((t, w) => t.plus(keyOf(w)), ZERO);
+  if (total.isZero() && zeroKeyCode) {
+    warnings.push({ code: zeroKeyCode });
+    keyOf = (w) => w.chosen!.goods;
+    total = carriers.reduce((t, w) => t.plus(keyOf(w)), ZERO);
+  }
+  const shares = new Map<Work, Dec>();
+  if (total.isZero()) {
+    const each = pool.div(carriers.length);
+    for (const w of carriers) shares.set(w, each);
+  } else {
+    for (const w of carriers) shares.set(w, pool.times(keyOf(w)).div(total));
+  }
+  return shares;
+}
+
+export interface RollOptions {
+  /** Leave out the per-line output (the volume curve needs totals only). */
+  lines?: boolean;
+}
+
+/**
+ * The cost roll at build quantity N on prepared data. First pass: each part line gets its
+ * cheapest eligible quote as the quote board ranks it (or its pin), cost lines are
+ * converted; lines that cannot be costed are left out and named. Second pass: per-shipment
+ * freight and fees are shared over the chosen quotes whose Incoterm carries them (freight
+ * by goods value or by weight, fees by goods value), then insurance and duty are computed
+ * with those shares in. Nothing is rounded.
+ */
+export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: RollOptions = {}): CostRollResult {
+  const N = dec(buildQty, 'qty');
+  if (!N.isInteger() || N.lt(1)) throw new CostingInputError(`must be a whole number ≥ 1 (${buildQty})`, 'qty');
+  const amortiseOver = p.amortisationQty ?? N;
+  const warnings: RollWarning[] = [...p.staticWarnings];
+
+  const work: Work[] = p.lines.map((pl) => {
+    const w: Work = {
+      pl,
+      status: 'costed',
+      warnings: [],
+      category: pl.line.kind,
+      assemblyPerUnit: ZERO,
+      fxRows: [],
+      assembly: ZERO,
+      landed: ZERO,
+    };
+    if (pl.line.dnp) {
+      w.status = 'dnp';
+      return w;
+    }
+    return pl.line.kind === 'part' ? costPartLine(p, w, N) : costCostLine(p, w);
+  });
+
+  const partLines = work.filter((w) => w.status === 'costed' && w.chosen);
+  const freightCarriers = partLines.filter((w) => needsAdder(w.chosen!.pq.incoterm, 'freight'));
+  const feeCarriers = partLines.filter((w) => needsAdder(w.chosen!.pq.incoterm, 'fees'));
+  const byWeight = weightNeeded(p);
+  const freightShares = p.freightPool.ok
+    ? sharePool(
+        p.freightPool.value,
+        freightCarriers,
+        byWeight ? (w) => w.weight ?? ZERO : (w) => w.chosen!.goods,
+        warnings,
+        byWeight ? 'freight_weight_zero' : null,
+      )
+    : null;
+  const feeShares = p.feesPool.ok ? sharePool(p.feesPool.value, feeCarriers, (w) => w.chosen!.goods, warnings, null) : null;
+  if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
+    warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
+  }
+  if (p.feesPool.ok && !p.feesPool.value.isZero() && feeCarriers.length === 0) {
+    warnings.push({ code: 'fees_unallocated', detail: 'no chosen quote has an Incoterm that carries fees' });
+  }
+
+  let costLinesPerUnit = ZERO;
+  let oneTimeTotal = ZERO;
+  const byCategory = new Map<string, Sums>();
+  const bySupplier = new Map<string, { goods: Dec; excessValue: Dec; landed: Dec; count: number }>();
+  const fxUsed = new Map<string, FxRateUsed>();
+  const noteFx = (rows: FxRateUsed[]) => {
+    for (const r of rows) fxUsed.set(`${r.date}|${r.base}|${r.quote}`, r);
+  };
+  if (p.freightPool.ok && freightShares) noteFx(p.freightPool.rows);
+  if (p.feesPool.ok && feeShares) noteFx(p.feesPool.rows);
+  if (p.assemblyRates.ok) noteFx(p.assemblyRates.rows);
+
+  for (const w of work) {
+    if (w.status !== 'costed') continue;
+    noteFx(w.fxRows);
+    if (w.chosen) {
+      const c = w.chosen;
+      w.adders = lineAdders({
+        goods: c.goods,
+        incoterm: c.pq.incoterm,
+        pct: p.profile.pct,
+        dutyBasis: p.profile.dutyBasis,
+        dutyRate: w.duty!.rate,
+        freightShare: freightShares?.get(w),
+        feesShare: feeShares?.get(w),
+      });
+      w.assembly = w.assemblyPerUnit.isZero() ? ZERO : w.assemblyPerUnit.times(N);
+      w.landed = add(w.adders.landed, w.assembly);
+      w.excessQty = c.order.orderQty.minus(w.required!);
+      const excessInQuote = w.excessQty.times(c.order.unitPrice);
+      w.excessValue = c.fx.route === 'same' ? excessInQuote : excessInQuote.times(c.fx.rate);
+      const supplierId = c.pq.quote.supplierId;
+      let s = bySupplier.get(supplierId);
+      if (!s) bySupplier.set(supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
+      s.goods = add(s.goods, c.goods);
+      s.excessValue = add(s.excessValue, w.excessValue);
+      s.landed = add(s.landed, w.landed);
+      s.count += 1;
+    } else {
+      const perUnit = w.costPerUnit ?? ZERO;
+      const oneTime = w.oneTimeCost ?? ZERO;
+      costLinesPerUnit = add(costLinesPerUnit, perUnit);
+      oneTimeTotal = add(oneTimeTotal, oneTime);
+      w.landed = perUnit.times(N).plus(oneTime.times(N).div(amortiseOver));
+    }
+    let c = byCategory.get(w.category);
+    if (!c) byCategory.set(w.category, (c = emptySums()));
+    addLine(c, w);
+  }
+
+  // Totals from the category sums, in category order: the same figures, fewer additions.
+  const categoryKeys = [...byCategory.keys()].sort();
+  const total = emptySums();
+  for (const k of categoryKeys) addSums(total, byCategory.get(k)!);
+  const oneTimePerUnit = oneTimeTotal.div(amortiseOver);
+  // Every line's landed charge: goods, adders and assembly of part lines, per-unit cost lines
+  // × N and one-time costs' share of this build (N / amortisation quantity).
+  const landedTotal = total.landed;
+  const landedPerUnit = landedTotal.div(N);
+  const leftOutLines = work
+    .filter((w) => w.status === 'left_out')
+    .sort((a, b) => a.pl.index - b.pl.index)
+    .map((w) => ({
+      lineId: w.pl.line.id,
+      refDes: w.pl.line.refDes ?? null,
+      reason: w.leftOut!.reason,
+      ...(w.leftOut!.detail ? { detail: w.leftOut!.detail } : {}),
+    }));
+  if (leftOutLines.length > 0) warnings.push({ code: 'lines_left_out', detail: String(leftOutLines.length) });
+  const dnpIds = work.filter((w) => w.status === 'dnp').sort((a, b) => a.pl.index - b.pl.index).map((w) => w.pl.line.id);
+
+  const perUnit = (v: Dec) => perUnitText(v.div(N));
+  const categoryRows: CategoryTotal[] = categoryKeys
+    .map((category) => [category, byCategory.get(category)!] as const)
+    .map(([category, s]) => ({
+      category,
+      lineCount: s.count,
+      goods: moneyText(s.goods),
+      excessValue: moneyText(s.excessValue),
+      adders: moneyText(s.origin.plus(s.freight).plus(s.insurance).plus(s.duty).plus(s.fees).plus(s.destination)),
+      assembly: moneyText(s.assembly),
+      landed: moneyText(s.landed),
+      landedPerUnit: perUnit(s.landed),
+    }));
+  const supplierRows: SupplierTotal[] = [...bySupplier.entries()]
+    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+    .map(([supplierId, s]) => ({
+      supplierId,
+      lineCount: s.count,
+      goods: moneyText(s.goods),
+      excessValue: moneyText(s.excessValue),
+      landed: moneyText(s.landed),
+      landedPerUnit: perUnit(s.landed),
+    }));
+
+  const lines: CostRollLine[] =
+    options.lines === false
+      ? []
+      : [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => lineOutput(w, N));
+
+  return {
+    qty: N.toNumber(),
+    date: p.date,
+    currency: p.currency,
+    lines,
+    totals: {
+      goods: moneyText(total.goods),
+      excessValue: moneyText(total.excessValue),
+      origin: moneyText(total.origin),
+      freight: moneyText(total.freight),
+      insurance: moneyText(total.insurance),
+      duty: moneyText(total.duty),
+      fees: moneyText(total.fees),
+      destination: moneyText(total.destination),
+      assembly: moneyText(total.assembly),
+      assemblyPerUnit: perUnitText(total.assembly.div(N)),
+      costLinesPerUnit: perUnitText(costLinesPerUnit),
+      oneTimeTotal: moneyText(oneTimeTotal),
+      oneTimePerUnit: perUnitText(oneTimePerUnit),
+      landedTotal: moneyText(landedTotal),
+      landedPerUnit: perUnitText(landedPerUnit),
+      landedPerUnitExclOneTime: perUnitText(landedPerUnit.minus(oneTimePerUnit)),
+      targetUnitCost: p.targetUnitCost === null ? null : perUnitText(p.targetUnitCost),
+      gapToTarget: p.targetUnitCost === null ? null : perUnitText(landedPerUnit.minus(p.targetUnitCost)),
+    },
+    byCategory: categoryRows,
+    bySupplier: supplierRows,
+    warnings,
+    leftOut: { count: leftOutLines.length, lines: leftOutLines },
+    dnp: { count: dnpIds.length, lineIds: dnpIds },
+    fxRates: [...fxUsed.values()].sort((a, b) =>
+      a.date !== b.date ? (a.date < b.date ? -1 : 1) : `${a.base}${a.quote}` < `${b.base}${b.quote}` ? -1 : 1,
+    ),
+  };
+}
+
+function lineOutput(w: Work, N: Dec): CostRollLine {
+  const { line } = w.pl;
+  const c = w.chosen;
+  const a = w.adders;
+  const zero = moneyText(ZERO);
+  return {
+    lineId: line.id,
+    refDes: line.refDes ?? null,
+    kind: line.kind,
+    status: w.status,
+    partId: line.partId ?? null,
+    category: w.category,
+    quoteId: c ? c.pq.quote.id : null,
+    supplierId: c ? c.pq.quote.supplierId : null,
+    incoterm: c ? c.pq.incoterm : null,
+    requiredQty: w.required ? w.required.toNumber() : null,
+    orderQty: c ? c.order.orderQty.toNumber() : null,
+    excessQty: w.excessQty ? w.excessQty.toNumber() : null,
+    unitPrice: c ? perUnitText(c.order.unitPrice) : null,
+    unitPriceCurrency: c ? c.pq.quote.currency : null,
+    unitPriceConverted: c ? perUnitText(c.order.unitPrice.times(c.fx.rate)) : null,
+    goodsValue: a && c ? moneyText(c.goods) : zero,
+    excessValue: a ? moneyText(w.excessValue!) : zero,
+    origin: a ? moneyText(a.origin) : zero,
+    freight: a ? moneyText(a.freight) : zero,
+    insurance: a ? moneyText(a.insurance) : zero,
+    customsValue: a && a.customsValue ? moneyText(a.customsValue) : null,
+    dutyPct: w.duty ? w.duty.ratePct.toString() : null,
+    duty: a ? moneyText(a.duty) : zero,
+    fees: a ? moneyText(a.fees) : zero,
+    destination: a ? moneyText(a.destination) : zero,
+    assembly: moneyText(w.assembly),
+    costPerUnit: w.costPerUnit ? perUnitText(w.costPerUnit) : null,
+    oneTimeCost: w.oneTimeCost ? moneyText(w.oneTimeCost) : null,
+    landed: moneyText(w.landed),
+    landedPerUnit: perUnitText(w.landed.div(N)),
+    fxRates: w.status === 'costed' ? w.fxRows : [],
+    warnings: w.warnings,
+  };
+}
+
+/**
+ * The BOM cost roll: landed cost per unit at the BOM's build quantity, per the product's
+ * costing rules. Pure: the caller reads the BOM, profile, parts, quotes, suppliers and FX
+ * table and hands them in.
+ */
+export function costRoll(input: CostRollInput, fxIndex?: FxIndex): CostRollResult {
+  return rollPrepared(prepareCostRoll(input, fxIndex), input.bom.qty);
+}

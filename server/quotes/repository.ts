@@ -1,0 +1,58 @@
+import type { DbOrTrx } from '../db/knex';
+import { scoped } from '../db/scope';
+import type { QuoteOut } from '../../src/shared/schemas/quotes';
+
+export interface QuoteRow extends Omit<QuoteOut, 'expired' | 'createdAt' | 'priceBreaks'> {
+  createdAt: Date;
+  priceBreaks: { minQty: number; unitPrice: string }[];
+}
+
+export const today = () => new Date().toISOString().slice(0, 10);
+
+export function quoteView(q: QuoteRow, on = today()): QuoteOut {
+  return {
+    id: q.id, partId: q.partId, supplierId: q.supplierId, supplierName: q.supplierName, currency: q.currency,
+    incoterm: q.incoterm, moq: Number(q.moq), orderMultiple: Number(q.orderMultiple), leadTimeDays: q.leadTimeDays,
+    validFrom: q.validFrom, validUntil: q.validUntil, priceBreaks: q.priceBreaks, source: q.source, note: q.note,
+    expired: q.validUntil !== null && q.validUntil < on, createdAt: new Date(q.createdAt).toISOString(), version: q.version,
+  };
+}
+
+/**
+ * Quotes with their price breaks in two queries, whatever the number of quotes (the cost
+ * roll and the quote board read through here too).
+ */
+export async function loadQuotes(
+  db: DbOrTrx,
+  workspaceId: string,
+  filter: { partIds?: string[]; supplierId?: string; ids?: string[] } = {},
+): Promise<QuoteRow[]> {
+  const q = scoped(db, 'quotes', workspaceId)
+    .join('suppliers', function () {
+      this.on('suppliers.id', 'quotes.supplierId').andOn('suppliers.workspaceId', 'quotes.workspaceId');
+    })
+    .select('quotes.*', 'suppliers.name as supplierName')
+    .orderBy('quotes.id');
+  if (filter.partIds) q.whereIn('quotes.partId', filter.partIds);
+  if (filter.supplierId) q.andWhere('quotes.supplierId', filter.supplierId);
+  if (filter.ids) q.whereIn('quotes.id', filter.ids);
+  const quotes = (await q) as (Omit<QuoteRow, 'priceBreaks'> & { priceBreaks?: QuoteRow['priceBreaks'] })[];
+  if (!quotes.length) return [];
+  const breaks = (await scoped(db, 'price_breaks', workspaceId)
+    // One array parameter instead of thousands of placeholders for a large BOM.
+    .andWhereRaw('quote_id = ANY(?::bigint[])', [quotes.map((x) => x.id)])
+    .orderBy(['quoteId', 'minQty'])
+    .select('quoteId', 'minQty', 'unitPrice')) as { quoteId: string; minQty: string; unitPrice: string }[];
+  const byQuote = new Map<string, QuoteRow['priceBreaks']>();
+  for (const b of breaks) {
+    const list = byQuote.get(b.quoteId) ?? [];
+    list.push({ minQty: Number(b.minQty), unitPrice: b.unitPrice });
+    byQuote.set(b.quoteId, list);
+  }
+  return quotes.map((x) => ({ ...x, moq: Number(x.moq), orderMultiple: Number(x.orderMultiple), priceBreaks: byQuote.get(x.id) ?? [] }));
+}
+
+export async function writeBreaks(db: DbOrTrx, workspaceId: string, quoteId: string, breaks: { minQty: number; unitPrice: string }[]) {
+  await db('price_breaks').where({ workspaceId, quoteId }).delete();
+  if (breaks.length) await db('price_breaks').insert(breaks.map((b) => ({ workspaceId, quoteId, minQty: b.minQty, unitPrice: b.unitPrice })));
+}

@@ -1,0 +1,184 @@
+import { useRef, useState, type ReactNode } from 'react';
+import {
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type OnChangeFn,
+  type RowData,
+  type SortDirection,
+  type SortingState,
+} from '@tanstack/react-table';
+import { useVirtualizer } from '@tanstack/react-virtual';
+
+// TanStack Table v8 (useReactTable / getCoreRowModel), chosen on purpose: see DEVELOPERS.md.
+declare module '@tanstack/react-table' {
+  // An augmentation must repeat the library's type parameters, used or not.
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars
+  interface ColumnMeta<TData extends RowData, TValue> {
+    /** A number column: tabular figures, right-aligned. */
+    numeric?: boolean;
+    /** Header text for screen readers only (an actions column still needs a name). */
+    hiddenHeader?: boolean;
+  }
+}
+
+export type DataTableProps<T> = {
+  /** The table's accessible name ("Members", "API tokens"). */
+  label: string;
+  // Columns mix value types; `any` here is TanStack's own advice for a column array.
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  columns: ColumnDef<T, any>[];
+  data: T[];
+  getRowId: (row: T) => string;
+  /** Shown instead of the table when there are no rows. */
+  empty: ReactNode;
+  /** Controlled sorting, e.g. from `useUrlSorting`; without it the table sorts on its own. */
+  sorting?: SortingState;
+  onSortingChange?: OnChangeFn<SortingState>;
+  /** Above this many rows only the visible rows are rendered. */
+  virtualizeAbove?: number;
+  /** Height of the scrolling body when virtualised. */
+  maxHeight?: string;
+};
+
+// A first guess for unseen rows; rendered rows are measured, so a taller row is fine.
+const ROW_HEIGHT = 40;
+
+function SortMark({ direction }: { direction: false | SortDirection }) {
+  return (
+    <svg aria-hidden="true" viewBox="0 0 8 12" className="size-2.5 shrink-0">
+      <path d="M4 1 7 5H1z" fill="currentColor" opacity={direction === 'asc' ? 1 : 0.25} />
+      <path d="M4 11 1 7h6z" fill="currentColor" opacity={direction === 'desc' ? 1 : 0.25} />
+    </svg>
+  );
+}
+
+/**
+ * The one headless table of the app: columns come from each area, this shell renders
+ * them densely with sortable headers, and renders only the visible rows of a long list.
+ */
+export function DataTable<T>({
+  label,
+  columns,
+  data,
+  getRowId,
+  empty,
+  sorting: sortingProp,
+  onSortingChange,
+  virtualizeAbove = 100,
+  maxHeight = '70vh',
+}: DataTableProps<T>) {
+  const [ownSorting, setOwnSorting] = useState<SortingState>([]);
+  const sorting = sortingProp ?? ownSorting;
+
+  const table = useReactTable({
+    data,
+    columns,
+    getRowId: (row) => getRowId(row),
+    state: { sorting },
+    onSortingChange: onSortingChange ?? setOwnSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
+
+  const rows = table.getRowModel().rows;
+  const virtualize = rows.length > virtualizeAbove;
+  const scrollRef = useRef<HTMLDivElement>(null);
+  const virtualizer = useVirtualizer({
+    count: rows.length,
+    getScrollElement: () => scrollRef.current,
+    estimateSize: () => ROW_HEIGHT,
+    overscan: 12,
+    enabled: virtualize,
+  });
+
+  if (data.length === 0) return <>{empty}</>;
+
+  const virtualRows = virtualize ? virtualizer.getVirtualItems() : null;
+  const visible = virtualRows ? virtualRows.map((item) => ({ row: rows[item.index], index: item.index })) : rows.map((row, index) => ({ row, index }));
+  const paddingTop = virtualRows && virtualRows.length > 0 ? virtualRows[0].start : 0;
+  const paddingBottom =
+    virtualRows && virtualRows.length > 0 ? virtualizer.getTotalSize() - virtualRows[virtualRows.length - 1].end : 0;
+  const columnCount = table.getVisibleLeafColumns().length;
+
+  return (
+    <div
+      ref={scrollRef}
+      className="overflow-auto rounded-lg border border-rule bg-surface"
+      style={virtualize ? { maxHeight } : undefined}
+    >
+      <table aria-label={label} aria-rowcount={virtualize ? rows.length + 1 : undefined} className="w-full border-collapse text-sm">
+        <thead className="sticky top-0 z-10 bg-surface">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id} aria-rowindex={virtualize ? 1 : undefined}>
+              {group.headers.map((header) => {
+                const meta = header.column.columnDef.meta;
+                const sortable = header.column.getCanSort();
+                const direction = header.column.getIsSorted();
+                const content = header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext());
+                return (
+                  <th
+                    key={header.id}
+                    scope="col"
+                    aria-sort={sortable ? (direction === 'asc' ? 'ascending' : direction === 'desc' ? 'descending' : 'none') : undefined}
+                    className={[
+                      'border-b border-rule px-3 py-2 text-xs font-semibold tracking-wide text-muted uppercase',
+                      meta?.numeric ? 'text-right' : 'text-left',
+                    ].join(' ')}
+                  >
+                    {meta?.hiddenHeader ? (
+                      <span className="sr-only">{content}</span>
+                    ) : sortable ? (
+                      <button
+                        type="button"
+                        onClick={header.column.getToggleSortingHandler()}
+                        className={`inline-flex items-center gap-1 uppercase hover:text-ink ${meta?.numeric ? 'flex-row-reverse' : ''}`}
+                      >
+                        {content}
+                        <SortMark direction={direction} />
+                      </button>
+                    ) : (
+                      content
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {paddingTop > 0 ? (
+            <tr aria-hidden="true">
+              <td colSpan={columnCount} style={{ height: paddingTop, padding: 0 }} />
+            </tr>
+          ) : null}
+          {visible.map(({ row, index }) => (
+            <tr
+              key={row.id}
+              data-index={index}
+              ref={virtualize ? virtualizer.measureElement : undefined}
+              aria-rowindex={virtualize ? index + 2 : undefined}
+              className="border-b border-rule/70 last:border-b-0 hover:bg-paper/60"
+            >
+              {row.getVisibleCells().map((cell) => (
+                <td
+                  key={cell.id}
+                  className={`px-3 py-1.5 align-middle ${cell.column.columnDef.meta?.numeric ? 'num' : ''}`}
+                >
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
+            </tr>
+          ))}
+          {paddingBottom > 0 ? (
+            <tr aria-hidden="true">
+              <td colSpan={columnCount} style={{ height: paddingBottom, padding: 0 }} />
+            </tr>
+          ) : null}
+        </tbody>
+      </table>
+    </div>
+  );
+}

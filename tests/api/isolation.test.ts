@@ -1,0 +1,84 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import passport from 'passport';
+import { routeTable } from '../../server/routes';
+import { startTestApp, signUp, type TestApp } from '../helpers/app';
+import { makePart, makeSupplier, makeQuote, makeProfile, tinyPdf } from '../helpers/factories';
+
+/**
+ * Workspace isolation: a member of another workspace gets 404 on every id route of the
+ * first and sees none of its rows in any list. Each id route needs a record of the first
+ * workspace below; a new id route without one fails here until it gets one.
+ */
+let t: TestApp;
+let a: Awaited<ReturnType<typeof signUp>>;
+let b: Awaited<ReturnType<typeof signUp>>;
+const ids: Record<string, string> = {};
+
+beforeAll(async () => {
+  t = await startTestApp();
+  a = await signUp(t, { workspaceName: 'First' });
+  b = await signUp(t, { workspaceName: 'Second' });
+  const invite = await a.agent.post('/api/invites').send({ email: `iso-${Date.now()}@tinbell.example`, role: 'buyer' }).expect(201);
+  const token = await a.agent.post('/api/tokens').send({ name: 'first ws token' }).expect(201);
+  ids['/api/invites/:id'] = invite.body.id;
+  ids['/api/tokens/:id'] = token.body.id;
+  ids['/api/members/:userId'] = a.user.id;
+  const part = await makePart(a.agent);
+  const supplier = await makeSupplier(a.agent);
+  const quote = await makeQuote(a.agent, part.id, supplier.id);
+  const profile = await makeProfile(a.agent);
+  const fx = await a.agent.post('/api/fx-rates').send({ date: '2024-06-28', base: 'EUR', quote: 'USD', rate: '1.0705' }).expect(201);
+  const file = await a.agent.post(`/api/parts/${part.id}/files`).attach('file', tinyPdf, 'sheet.pdf').expect(201);
+  for (const path of ['/api/parts/:id', '/api/parts/:id/quotes', '/api/parts/:id/offers', '/api/parts/:id/files']) ids[path] = part.id;
+  ids['/api/suppliers/:id'] = supplier.id;
+  ids['/api/quotes/:id'] = quote.id;
+  ids['/api/landed-cost-profiles/:id'] = profile.id;
+  ids['/api/fx-rates/:id'] = fx.body.id;
+  ids['/api/files/:id'] = file.body.id;
+});
+
+// A valid request apart from the id, so that only workspace scoping can answer 404.
+const bodies: Record<string, object> = {
+  'PATCH /api/members/:userId': { role: 'viewer', version: 1 },
+  'PATCH /api/parts/:id': { description: 'changed', version: 1 },
+  'PATCH /api/suppliers/:id': { notes: 'changed', version: 1 },
+  'PATCH /api/quotes/:id': { note: 'changed', version: 1 },
+  'PATCH /api/landed-cost-profiles/:id': { notes: 'changed', version: 1 },
+};
+const queries: Record<string, object> = { 'GET /api/parts/:id/offers': { qty: 100 } };
+afterAll(async () => t.close());
+
+const idRoutes = () => routeTable(passport).filter((r) => r.access !== 'public' && /:[A-Za-z]+/.test(r.path));
+
+describe('another workspace is unreachable', () => {
+  it('every id route of the first workspace answers 404 to the second', async () => {
+    for (const r of idRoutes()) {
+      const id = ids[r.path];
+      expect(id, `no record of the first workspace for ${r.path}: add one to this test`).toBeDefined();
+      const path = r.path.replace(/:[A-Za-z]+/, id);
+      const key = `${r.method.toUpperCase()} ${r.path}`;
+      const req = b.agent[r.method](path).query(queries[key] ?? {});
+      const res = r.bodyKind === 'multipart' ? await req.attach('file', tinyPdf, 'sheet.pdf') : await req.send(bodies[key]);
+      expect(res.status, `${r.method} ${path}: ${JSON.stringify(res.body)}`).toBe(404);
+    }
+    // Nothing of the first workspace changed.
+    expect(await t.database.db('invites').where({ id: ids['/api/invites/:id'] }).first()).toBeDefined();
+    expect((await t.database.db('api_tokens').where({ id: ids['/api/tokens/:id'] }).first()).revokedAt).toBeNull();
+    expect((await t.database.db('memberships').where({ userId: a.user.id }).first()).role).toBe('owner');
+  });
+
+  it('lists show none of the first workspace rows', async () => {
+    const lists = routeTable(passport).filter((r) => r.method === 'get' && r.access !== 'public' && !/:[A-Za-z]+/.test(r.path));
+    const firstIds = new Set([a.user.id, ...Object.values(ids)]);
+    for (const r of lists) {
+      const res = await b.agent.get(r.path);
+      if (res.status === 403) continue; // the role may not list it at all
+      expect(res.status, r.path).toBe(200);
+      const text = JSON.stringify(res.body);
+      expect(text, r.path).not.toContain('First');
+      for (const item of (res.body.items ?? []) as Record<string, unknown>[]) {
+        expect(firstIds.has(String(item.id ?? item.userId)), `${r.path} leaks ${JSON.stringify(item)}`).toBe(false);
+      }
+    }
+  });
+});

@@ -412,7 +412,9 @@ function sharePool(
     const each = pool.div(carriers.length);
     for (const w of carriers) shares.set(w, each);
   } else {
-    for (const w of carriers) shares.set(w, pool.times(keyOf(w)).div(total));
+    // One division for the pool, one multiplication per line.
+    const perKey = pool.div(total);
+    for (const w of carriers) shares.set(w, keyOf(w).times(perKey));
   }
   return shares;
 }

@@ -15,9 +15,7 @@ interface Tier {
 }
 
 interface BuyUp {
-  /** The break's own minimum quantity. */
-  minQty: Dec;
-  /** k × ceil(minQty / k), with its price and spend (fixed for the quote, so computed once). */
+  /** k × ceil(minQty / k) for one break, with its price and spend. */
   qty: Dec;
   price: Dec;
   spend: Dec;
@@ -28,9 +26,14 @@ export interface OrderTerms {
   tiers: Tier[];
   moq: Dec;
   multiple: Dec;
+  multipleIsOne: boolean;
   /** m' = max(MOQ, smallest break's minQty). */
   effectiveMoq: Dec;
-  buyUps: BuyUp[];
+  /**
+   * Buy-up candidate per break, fixed for the quote: filled on first use, since most
+   * requirements only ever look at the breaks above them.
+   */
+  buyUps: (BuyUp | undefined)[];
 }
 
 export interface OrderChoice {
@@ -44,9 +47,27 @@ export interface OrderChoice {
 }
 
 function positiveInteger(value: number, field: string): Dec {
+  if (typeof value === 'number') {
+    if (!Number.isInteger(value) || value < 1) throw new CostingInputError(`must be a whole number ≥ 1 (${value})`, field);
+    return new Dec(value);
+  }
   const d = dec(value, field);
   if (!d.isInteger() || d.lt(1)) throw new CostingInputError(`must be a whole number ≥ 1 (${value})`, field);
   return d;
+}
+
+function buyUp(terms: OrderTerms, i: number): BuyUp {
+  let b = terms.buyUps[i];
+  if (!b) {
+    const { tiers } = terms;
+    const qty = terms.multipleIsOne ? tiers[i].minQty : ceilToMultiple(tiers[i].minQty, terms.multiple);
+    // Rounding up to the multiple may carry the quantity into a higher tier.
+    let j = i;
+    while (j + 1 < tiers.length && tiers[j + 1].minQty.lte(qty)) j++;
+    const price = tiers[j].unitPrice;
+    b = terms.buyUps[i] = { qty, price, spend: qty.times(price) };
+  }
+  return b;
 }
 
 /** price(Q): the unit price of the break with the greatest minQty ≤ Q (tiers ascending). */
@@ -88,16 +109,14 @@ export function prepareOrderTerms(
   }
   const moqD = positiveInteger(moq, `${field}.moq`);
   const multiple = positiveInteger(orderMultiple, `${field}.orderMultiple`);
-  const effectiveMoq = maxDec(moqD, tiers[0].minQty);
-  const buyUps = tiers.map((t, i) => {
-    const qty = ceilToMultiple(t.minQty, multiple);
-    // Rounding up to the multiple may carry the quantity into a higher tier.
-    let j = i;
-    while (j + 1 < tiers.length && tiers[j + 1].minQty.lte(qty)) j++;
-    const price = tiers[j].unitPrice;
-    return { minQty: t.minQty, qty, price, spend: qty.times(price) };
-  });
-  return { tiers, moq: moqD, multiple, effectiveMoq, buyUps };
+  return {
+    tiers,
+    moq: moqD,
+    multiple,
+    multipleIsOne: multiple.eq(1),
+    effectiveMoq: maxDec(moqD, tiers[0].minQty),
+    buyUps: new Array<BuyUp | undefined>(tiers.length),
+  };
 }
 
 /** price(Q) for a prepared quote; undefined below the smallest break. */
@@ -121,8 +140,8 @@ export interface OrderSpend {
  */
 export function orderSpend(terms: OrderTerms, required: Dec): OrderSpend {
   const need = required.gt(terms.effectiveMoq) ? required : terms.effectiveMoq;
-  const base = terms.multiple.eq(1) && need.isInteger() ? need : ceilToMultiple(need, terms.multiple);
-  const { tiers, buyUps } = terms;
+  const base = terms.multipleIsOne && need.isInteger() ? need : ceilToMultiple(need, terms.multiple);
+  const { tiers } = terms;
   let i = tiers.length - 1;
   while (i > 0 && tiers[i].minQty.gt(base)) i--;
   let orderQty = base;
@@ -130,8 +149,8 @@ export function orderSpend(terms: OrderTerms, required: Dec): OrderSpend {
   let goodsValue = base.times(unitPrice);
   // Every break above Q0's tier has minQty > Q0: those are the buy-up candidates. They are
   // ascending, so a strict "<" keeps the smaller Q on a tie.
-  for (let j = i + 1; j < buyUps.length; j++) {
-    const b = buyUps[j];
+  for (let j = i + 1; j < tiers.length; j++) {
+    const b = buyUp(terms, j);
     if (b.spend.lt(goodsValue)) {
       orderQty = b.qty;
       unitPrice = b.price;

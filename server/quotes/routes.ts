@@ -4,6 +4,7 @@ import { errors } from '../http/errors';
 import { idParam, idParams } from '../../src/shared/schemas/common';
 import { quoteCreateBody, quotePatchBody, quoteOut, offersQuery } from '../../src/shared/schemas/quotes';
 import { offersForPart } from './board';
+import { importQuotes, quoteTemplateCsv } from './import';
 import { scoped } from '../db/scope';
 import { updateOrConflict, deleteOrNotFound, getOrNotFound } from '../db/versioned';
 import { audit } from '../audit/repository';
@@ -98,5 +99,21 @@ export const quoteRoutes: RouteDef[] = [
     summary: 'The quote board: every offer for one part at a quantity, in landed cost per piece (percentage adders and duty of the profile), the cheapest marked, ineligible offers with the reason.',
     params: idParams, query: offersQuery,
     handler: async ({ auth, params, query, deps }) => offersForPart(deps, auth.workspaceId, params.id, query),
+  }),
+  route({
+    method: 'post', path: '/api/quotes/import', access: 'quotes.write', tag: 'Quotes', bodyKind: 'multipart', maxUploadBytes: 10 * 1024 * 1024,
+    summary: 'Import quotes from CSV or XLSX: one row per price break. Without `?commit=true` it answers a preview (columns, suggested mapping, per-row problems); with it, all quotes are written in one transaction or none. Form fields: `file`, optional `mapping` (JSON: field → column), optional `supplierId` (one supplier for the whole file).',
+    query: z.strictObject({ commit: z.enum(['true', 'false']).optional() }),
+    handler: async ({ auth, query, upload, deps }) => importQuotes(deps, auth, upload.file, upload.fields, query.commit === 'true'),
+  }),
+  route({
+    method: 'get', path: '/api/quotes/import/template.csv', access: 'quotes.read', tag: 'Quotes',
+    summary: 'A CSV template for quote import.',
+    handler: async ({ res }) => {
+      res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+      res.setHeader('Content-Disposition', 'attachment; filename="farthing-quote-import.csv"');
+      res.send(quoteTemplateCsv);
+      return undefined;
+    },
   }),
 ];

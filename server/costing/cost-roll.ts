@@ -8,6 +8,7 @@ import { requiredQty } from './order-quantity';
 import { prepareProfile, type PreparedProfile } from './profile';
 import {
   compareQuotes,
+  convertedGoods,
   eligibilityReasons,
   LandedFactors,
   prepareQuote,
@@ -108,7 +109,7 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
   const quotesByPart = new Map<string, QuoteSlot[]>();
   const quotesById = new Map<string, QuoteSlot>();
   input.quotes.forEach((q, i) => {
-    const pq = prepareQuote(q, suppliers, `quotes.${i}`);
+    const pq = prepareQuote(q, suppliers, i);
     const slot = { pq, reasons: eligibilityReasons(pq, date, profile.maxLeadTimeDays) };
     let list = quotesByPart.get(q.partId);
     if (!list) quotesByPart.set(q.partId, (list = []));
@@ -211,6 +212,8 @@ interface Work {
   part?: Part;
   required?: Dec;
   chosen?: PricedQuote;
+  /** The chosen quote's goods value G in the reporting currency. */
+  goods?: Dec;
   duty?: DutyMatch;
   excessQty?: Dec;
   excessValue?: Dec;
@@ -307,6 +310,7 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
 
   if (!chosen) return fxMissing ? leaveOut(w, 'missing_fx', fxMissing) : leaveOut(w, 'no_quote');
   w.chosen = chosen;
+  w.goods = convertedGoods(chosen);
   w.fxRows = chosen.fx.rows;
 
   if (weightNeeded(p) && needsAdder(chosen.pq.incoterm, 'freight')) {
@@ -366,7 +370,7 @@ const add = (a: Dec, b: Dec): Dec => (b.isZero() ? a : a.plus(b));
 function addLine(s: Sums, w: Work): void {
   const a = w.adders;
   if (a) {
-    s.goods = add(s.goods, w.chosen!.goods);
+    s.goods = add(s.goods, w.goods!);
     s.excessValue = add(s.excessValue, w.excessValue!);
     s.origin = add(s.origin, a.origin);
     s.freight = add(s.freight, a.freight);
@@ -404,7 +408,7 @@ function sharePool(
   let total = carriers.reduce((t, w) => t.plus(keyOf(w)), ZERO);
   if (total.isZero() && zeroKeyCode) {
     warnings.push({ code: zeroKeyCode });
-    keyOf = (w) => w.chosen!.goods;
+    keyOf = (w) => w.goods!;
     total = carriers.reduce((t, w) => t.plus(keyOf(w)), ZERO);
   }
   const shares = new Map<Work, Dec>();
@@ -464,12 +468,12 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     ? sharePool(
         p.freightPool.value,
         freightCarriers,
-        byWeight ? (w) => w.weight ?? ZERO : (w) => w.chosen!.goods,
+        byWeight ? (w) => w.weight ?? ZERO : (w) => w.goods!,
         warnings,
         byWeight ? 'freight_weight_zero' : null,
       )
     : null;
-  const feeShares = p.feesPool.ok ? sharePool(p.feesPool.value, feeCarriers, (w) => w.chosen!.goods, warnings, null) : null;
+  const feeShares = p.feesPool.ok ? sharePool(p.feesPool.value, feeCarriers, (w) => w.goods!, warnings, null) : null;
   if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
     warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
   }
@@ -495,7 +499,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     if (w.chosen) {
       const c = w.chosen;
       w.adders = lineAdders({
-        goods: c.goods,
+        goods: w.goods!,
         incoterm: c.pq.incoterm,
         pct: p.profile.pct,
         dutyBasis: p.profile.dutyBasis,
@@ -511,7 +515,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
       const supplierId = c.pq.quote.supplierId;
       let s = bySupplier.get(supplierId);
       if (!s) bySupplier.set(supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
-      s.goods = add(s.goods, c.goods);
+      s.goods = add(s.goods, w.goods!);
       s.excessValue = add(s.excessValue, w.excessValue);
       s.landed = add(s.landed, w.landed);
       s.count += 1;
@@ -634,7 +638,7 @@ function lineOutput(w: Work, N: Dec): CostRollLine {
     unitPrice: c ? perUnitText(c.order.unitPrice) : null,
     unitPriceCurrency: c ? c.pq.quote.currency : null,
     unitPriceConverted: c ? perUnitText(c.order.unitPrice.times(c.fx.rate)) : null,
-    goodsValue: a && c ? moneyText(c.goods) : zero,
+    goodsValue: a && w.goods ? moneyText(w.goods) : zero,
     excessValue: a ? moneyText(w.excessValue!) : zero,
     origin: a ? moneyText(a.origin) : zero,
     freight: a ? moneyText(a.freight) : zero,

@@ -23,6 +23,11 @@ export const HUNDRED = new Dec(100);
 // Plain decimal notation only: Decimal itself would also take "1e3", "0x1F" and "Infinity".
 const DECIMAL_TEXT = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)$/;
 
+/** True for plain decimal notation ("12", "-0.5", ".25"); false for exponents, hex, words. */
+export function isDecimalText(text: string): boolean {
+  return DECIMAL_TEXT.test(text);
+}
+
 /**
  * Parses a decimal string (as the API and knex `numeric` columns deliver it) or an integer
  * count. Anything else is an input error naming the field.

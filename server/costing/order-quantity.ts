@@ -1,4 +1,4 @@
-import { ceilInt, ceilToMultiple, dec, Dec, maxDec, ONE } from './decimal';
+import { ceilInt, ceilToMultiple, Dec, isDecimalText, maxDec, ONE } from './decimal';
 import { CostingInputError } from './errors';
 import type { PriceBreak } from './types';
 
@@ -11,7 +11,9 @@ export function requiredQty(qtyPerUnit: Dec, buildQty: Dec, attrition: Dec): Dec
 
 interface Tier {
   minQty: Dec;
-  unitPrice: Dec;
+  /** The price as quoted; parsed on first use (a large requirement never reads the low tiers). */
+  priceText: string;
+  price?: Dec;
 }
 
 interface BuyUp {
@@ -29,31 +31,43 @@ export interface OrderTerms {
   multipleIsOne: boolean;
   /** m' = max(MOQ, smallest break's minQty). */
   effectiveMoq: Dec;
-  /**
-   * Buy-up candidate per break, fixed for the quote: filled on first use, since most
-   * requirements only ever look at the breaks above them.
-   */
+  /** Buy-up candidate per break, fixed for the quote; filled on first use. */
   buyUps: (BuyUp | undefined)[];
 }
 
-export interface OrderChoice {
-  required: Dec;
+/** The cheapest order for R without the excess figures: what ranking quotes needs. */
+export interface OrderSpend {
   orderQty: Dec;
   unitPrice: Dec;
   /** G = Q × price(Q), in the quote's currency. */
   goodsValue: Dec;
+}
+
+export interface OrderChoice extends OrderSpend {
+  required: Dec;
   excessQty: Dec;
   excessValue: Dec;
 }
 
-function positiveInteger(value: number, field: string): Dec {
-  if (typeof value === 'number') {
-    if (!Number.isInteger(value) || value < 1) throw new CostingInputError(`must be a whole number ≥ 1 (${value})`, field);
-    return new Dec(value);
+// Field paths are built only when something is wrong: this runs for every break of every quote.
+function positiveInteger(value: number, path: () => string): Dec {
+  if (typeof value === 'number' && Number.isInteger(value) && value >= 1) return new Dec(value);
+  if (typeof value === 'string' && isDecimalText(value)) {
+    const d = new Dec(value);
+    if (d.isInteger() && d.gte(1)) return d;
   }
-  const d = dec(value, field);
-  if (!d.isInteger() || d.lt(1)) throw new CostingInputError(`must be a whole number ≥ 1 (${value})`, field);
-  return d;
+  throw new CostingInputError(`must be a whole number ≥ 1 (${String(value)})`, path());
+}
+
+function priceOf(t: Tier): Dec {
+  return (t.price ??= new Dec(t.priceText));
+}
+
+/** price(Q) among ascending tiers: the break with the greatest minQty ≤ Q. */
+function tierIndex(tiers: Tier[], qty: Dec): number {
+  let i = tiers.length - 1;
+  while (i >= 0 && tiers[i].minQty.gt(qty)) i--;
+  return i;
 }
 
 function buyUp(terms: OrderTerms, i: number): BuyUp {
@@ -64,51 +78,40 @@ function buyUp(terms: OrderTerms, i: number): BuyUp {
     // Rounding up to the multiple may carry the quantity into a higher tier.
     let j = i;
     while (j + 1 < tiers.length && tiers[j + 1].minQty.lte(qty)) j++;
-    const price = tiers[j].unitPrice;
+    const price = priceOf(tiers[j]);
     b = terms.buyUps[i] = { qty, price, spend: qty.times(price) };
   }
   return b;
-}
-
-/** price(Q): the unit price of the break with the greatest minQty ≤ Q (tiers ascending). */
-function priceIn(tiers: Tier[], qty: Dec): Dec | undefined {
-  for (let i = tiers.length - 1; i >= 0; i--) {
-    if (tiers[i].minQty.lte(qty)) return tiers[i].unitPrice;
-  }
-  return undefined;
 }
 
 /**
  * Parses a quote's price breaks, MOQ and order multiple. Breaks are sorted by minQty;
  * when two breaks share a minQty the lower price is kept (the buyer would take it).
  */
-export function prepareOrderTerms(
-  priceBreaks: PriceBreak[],
-  moq: number,
-  orderMultiple: number,
-  field = 'quote',
-): OrderTerms {
+export function prepareOrderTerms(priceBreaks: PriceBreak[], moq: number, orderMultiple: number, field = 'quote'): OrderTerms {
   if (!Array.isArray(priceBreaks) || priceBreaks.length === 0) {
     throw new CostingInputError('a quote needs at least one price break', `${field}.priceBreaks`);
   }
   let tiers: Tier[] = priceBreaks.map((b, i) => {
-    const minQty = positiveInteger(b.minQty, `${field}.priceBreaks.${i}.minQty`);
-    const unitPrice = dec(b.unitPrice, `${field}.priceBreaks.${i}.unitPrice`);
-    if (unitPrice.isNeg()) throw new CostingInputError('must not be negative', `${field}.priceBreaks.${i}.unitPrice`);
-    return { minQty, unitPrice };
+    const minQty = positiveInteger(b.minQty, () => `${field}.priceBreaks.${i}.minQty`);
+    const priceText = typeof b.unitPrice === 'string' ? b.unitPrice.trim() : String(b.unitPrice);
+    if (!isDecimalText(priceText) || priceText.startsWith('-')) {
+      throw new CostingInputError(`not a price (${JSON.stringify(b.unitPrice)})`, `${field}.priceBreaks.${i}.unitPrice`);
+    }
+    return { minQty, priceText };
   });
   // Quotes usually list breaks in ascending order; sort and de-duplicate only when not.
   let ascending = true;
   for (let i = 1; i < tiers.length && ascending; i++) ascending = tiers[i - 1].minQty.lt(tiers[i].minQty);
   if (!ascending) {
-    const sorted = [...tiers].sort((a, b) => a.minQty.cmp(b.minQty) || a.unitPrice.cmp(b.unitPrice));
+    const sorted = [...tiers].sort((a, b) => a.minQty.cmp(b.minQty) || priceOf(a).cmp(priceOf(b)));
     tiers = [];
     for (const t of sorted) {
       if (tiers.length === 0 || !tiers[tiers.length - 1].minQty.eq(t.minQty)) tiers.push(t);
     }
   }
-  const moqD = positiveInteger(moq, `${field}.moq`);
-  const multiple = positiveInteger(orderMultiple, `${field}.orderMultiple`);
+  const moqD = positiveInteger(moq, () => `${field}.moq`);
+  const multiple = positiveInteger(orderMultiple, () => `${field}.orderMultiple`);
   return {
     tiers,
     moq: moqD,
@@ -121,15 +124,8 @@ export function prepareOrderTerms(
 
 /** price(Q) for a prepared quote; undefined below the smallest break. */
 export function priceAt(terms: OrderTerms, qty: Dec): Dec | undefined {
-  return priceIn(terms.tiers, qty);
-}
-
-/** The cheapest order for R without the excess figures: what ranking quotes needs. */
-export interface OrderSpend {
-  orderQty: Dec;
-  unitPrice: Dec;
-  /** G = Q × price(Q), in the quote's currency. */
-  goodsValue: Dec;
+  const i = tierIndex(terms.tiers, qty);
+  return i < 0 ? undefined : priceOf(terms.tiers[i]);
 }
 
 /**
@@ -142,10 +138,10 @@ export function orderSpend(terms: OrderTerms, required: Dec): OrderSpend {
   const need = required.gt(terms.effectiveMoq) ? required : terms.effectiveMoq;
   const base = terms.multipleIsOne && need.isInteger() ? need : ceilToMultiple(need, terms.multiple);
   const { tiers } = terms;
-  let i = tiers.length - 1;
-  while (i > 0 && tiers[i].minQty.gt(base)) i--;
+  // base ≥ m' ≥ the smallest break, so it always has a tier.
+  const i = tierIndex(tiers, base);
   let orderQty = base;
-  let unitPrice = tiers[i].unitPrice;
+  let unitPrice = priceOf(tiers[i]);
   let goodsValue = base.times(unitPrice);
   // Every break above Q0's tier has minQty > Q0: those are the buy-up candidates. They are
   // ascending, so a strict "<" keeps the smaller Q on a tie.

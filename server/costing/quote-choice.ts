@@ -1,7 +1,7 @@
 import { dec, Dec, moneyText, perUnitText } from './decimal';
 import { CostingInputError } from './errors';
 import { createFxIndex, type FxFound, type FxIndex } from './fx';
-import { assertIncoterm } from './incoterms';
+import { assertIncoterm, isIncoterm } from './incoterms';
 import { boardLandedFactor, lineAdders } from './landed';
 import { chooseOrder, orderSpend, prepareOrderTerms, type OrderSpend, type OrderTerms } from './order-quantity';
 import type { DutyMatch } from './duty';
@@ -28,13 +28,14 @@ export interface PreparedQuote {
   createdAtMs: number;
 }
 
-export function prepareQuote(quote: Quote, suppliers: ReadonlyMap<string, Supplier>, field = `quotes.${quote.id}`): PreparedQuote {
+export function prepareQuote(quote: Quote, suppliers: ReadonlyMap<string, Supplier>, index?: number): PreparedQuote {
+  const field = index === undefined ? `quote ${quote.id}` : `quotes.${index}`;
   const supplier = suppliers.get(quote.supplierId);
   if (!supplier) throw new CostingInputError(`supplier ${quote.supplierId} is not in the input`, `${field}.supplierId`);
   const created = quote.createdAt ? Date.parse(quote.createdAt) : Number.NaN;
   return {
     quote,
-    incoterm: assertIncoterm(quote.incoterm, `${field}.incoterm`),
+    incoterm: isIncoterm(quote.incoterm) ? quote.incoterm : assertIncoterm(quote.incoterm, `${field}.incoterm`),
     terms: prepareOrderTerms(quote.priceBreaks, quote.moq, quote.orderMultiple, field),
     supplierActive: supplier.active === true,
     createdAtMs: Number.isNaN(created) ? Number.POSITIVE_INFINITY : created,
@@ -63,15 +64,22 @@ export function eligibilityReasons(pq: PreparedQuote, date: IsoDate, maxLeadTime
   return reasons;
 }
 
-/** A quote priced for one requirement, in the reporting currency. */
+/** A quote priced for one requirement. */
 export interface PricedQuote {
   pq: PreparedQuote;
   order: OrderSpend;
+  /** The rate from the quote's currency to the one compared in. */
   fx: FxFound;
-  /** G in the reporting currency. */
-  goods: Dec;
-  /** The quote board's landed line cost: percentage adders and duty, no per-shipment shares. */
+  /**
+   * The quote board's landed line cost in the compared currency: percentage adders and
+   * duty, no per-shipment shares.
+   */
   boardLanded: Dec;
+}
+
+/** G converted: the goods value in the compared currency. */
+export function convertedGoods(p: PricedQuote): Dec {
+  return p.fx.route === 'same' ? p.order.goodsValue : p.order.goodsValue.times(p.fx.rate);
 }
 
 function leadRank(pq: PreparedQuote): number {
@@ -93,21 +101,25 @@ export function compareQuotes(a: PricedQuote, b: PricedQuote): number {
 }
 
 /**
- * Caches the board landed factor per (duty match, Incoterm) for one profile. Duty matches
- * are themselves cached per HS code, so this is two Map hits per quote priced.
+ * Caches, for one profile, the board's landed cost per unit of quoted goods value:
+ * FX rate × landed factor, per (duty match, Incoterm, rate). Duty matches and rates are
+ * themselves cached objects, so ranking a quote is three Map hits and one multiplication.
  */
 export class LandedFactors {
-  private readonly cache = new Map<DutyMatch, Map<Incoterm, Dec>>();
+  private readonly cache = new Map<DutyMatch, Map<Incoterm, Map<FxFound, Dec>>>();
   constructor(private readonly profile: PreparedProfile) {}
-  get(incoterm: Incoterm, duty: DutyMatch): Dec {
+  multiplier(incoterm: Incoterm, duty: DutyMatch, fx: FxFound): Dec {
     let byTerm = this.cache.get(duty);
     if (!byTerm) this.cache.set(duty, (byTerm = new Map()));
-    let f = byTerm.get(incoterm);
-    if (!f) {
-      f = boardLandedFactor(incoterm, this.profile.pct, this.profile.dutyBasis, duty.rate);
-      byTerm.set(incoterm, f);
+    let byRate = byTerm.get(incoterm);
+    if (!byRate) byTerm.set(incoterm, (byRate = new Map()));
+    let m = byRate.get(fx);
+    if (!m) {
+      const factor = boardLandedFactor(incoterm, this.profile.pct, this.profile.dutyBasis, duty.rate);
+      m = fx.route === 'same' ? factor : fx.rate.times(factor);
+      byRate.set(fx, m);
     }
-    return f;
+    return m;
   }
 }
 
@@ -120,8 +132,7 @@ export function priceQuote(
   factors: LandedFactors,
   order: OrderSpend = orderSpend(pq.terms, required),
 ): PricedQuote {
-  const goods = fx.route === 'same' ? order.goodsValue : order.goodsValue.times(fx.rate);
-  return { pq, order, fx, goods, boardLanded: goods.times(factors.get(pq.incoterm, duty)) };
+  return { pq, order, fx, boardLanded: order.goodsValue.times(factors.multiplier(pq.incoterm, duty, fx)) };
 }
 
 function positiveQty(qty: number, field: string): Dec {
@@ -151,7 +162,7 @@ export function quoteBoard(input: QuoteBoardInput, fxIndex?: FxIndex): QuoteBoar
   const offers: Offer[] = input.quotes
     .filter((q) => q.partId === input.partId)
     .map((quote, i) => {
-      const pq = prepareQuote(quote, suppliers, `quotes.${i}`);
+      const pq = prepareQuote(quote, suppliers, i);
       const reasons = eligibilityReasons(pq, input.date, profile.maxLeadTimeDays);
       const rate = fx.lookup(quote.currency, currency, input.date);
       const order = chooseOrder(pq.terms, required);
@@ -188,8 +199,9 @@ export function quoteBoard(input: QuoteBoardInput, fxIndex?: FxIndex): QuoteBoar
       }
       const priced = priceQuote(pq, required, rate, duty, factors, order);
       if (reasons.length === 0 && (!best || compareQuotes(priced, best) < 0)) best = priced;
+      const goods = convertedGoods(priced);
       const a = lineAdders({
-        goods: priced.goods,
+        goods,
         incoterm: pq.incoterm,
         pct: profile.pct,
         dutyBasis: profile.dutyBasis,
@@ -201,7 +213,7 @@ export function quoteBoard(input: QuoteBoardInput, fxIndex?: FxIndex): QuoteBoar
         reason: reasons[0] ?? null,
         reasons,
         unitPriceConverted: perUnitText(order.unitPrice.times(rate.rate)),
-        goodsValue: moneyText(priced.goods),
+        goodsValue: moneyText(goods),
         excessValue: moneyText(order.excessValue.times(rate.rate)),
         origin: moneyText(a.origin),
         freight: moneyText(a.freight),

@@ -14,6 +14,7 @@ export default defineConfig({
   test: {
     environment: 'node',
     include: ['src/**/*.test.{ts,tsx}', 'server/**/*.test.ts', 'tests/**/*.test.ts', 'stripe-fake/**/*.test.ts'],
+    exclude: ['**/node_modules/**', '**/.scratch/**', 'dist/**'],
     globalSetup: ['tests/setup/global.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,

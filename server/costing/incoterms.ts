@@ -60,16 +60,17 @@ export interface CustomsValueParts {
  * DDP: the seller pays the duty, so there is no customs value for the buyer (null).
  */
 export function customsValue(incoterm: Incoterm, basis: DutyBasis, p: CustomsValueParts): Dec | null {
+  const plus = (a: Dec, b: Dec) => (b.isZero() ? a : a.plus(b));
   switch (incoterm) {
     case 'EXW':
-      return basis === 'CIF' ? p.goods.plus(p.origin).plus(p.freight).plus(p.insurance) : p.goods.plus(p.origin);
+      return basis === 'CIF' ? plus(plus(plus(p.goods, p.origin), p.freight), p.insurance) : plus(p.goods, p.origin);
     case 'FCA':
     case 'FAS':
     case 'FOB':
-      return basis === 'CIF' ? p.goods.plus(p.freight).plus(p.insurance) : p.goods;
+      return basis === 'CIF' ? plus(plus(p.goods, p.freight), p.insurance) : p.goods;
     case 'CFR':
     case 'CPT':
-      return basis === 'CIF' ? p.goods.plus(p.insurance) : p.goods;
+      return basis === 'CIF' ? plus(p.goods, p.insurance) : p.goods;
     case 'CIF':
     case 'CIP':
     case 'DAP':

@@ -1,5 +1,5 @@
 import { Dec, ONE, ZERO } from './decimal';
-import { customsValue, needsAdder } from './incoterms';
+import { customsValue, INCOTERM_ADDERS } from './incoterms';
 import type { PercentAdders } from './profile';
 import type { DutyBasis, Incoterm } from './types';
 
@@ -33,6 +33,11 @@ export interface LineAdders {
   landed: Dec;
 }
 
+// Zero adders are common (terms the Incoterm does not need, profile fields left at 0);
+// skipping them saves decimal allocations on every line of a large BOM.
+const add = (a: Dec, b: Dec | undefined): Dec => (b === undefined || b.isZero() ? a : a.plus(b));
+const times = (rate: Dec, value: Dec): Dec => (rate.isZero() ? ZERO : rate.times(value));
+
 /**
  * The adders on one line: origin = originPct × G; freight = freightPct × G + share;
  * insurance = insurancePct × 1.10 × (G + origin + freight); duty = rate × customs value;
@@ -41,15 +46,16 @@ export interface LineAdders {
  */
 export function lineAdders(a: AdderInput): LineAdders {
   const g = a.goods;
-  const origin = needsAdder(a.incoterm, 'origin') ? a.pct.origin.times(g) : ZERO;
-  const freight = needsAdder(a.incoterm, 'freight') ? a.pct.freight.times(g).plus(a.freightShare ?? ZERO) : ZERO;
-  const insurance = needsAdder(a.incoterm, 'insurance')
-    ? a.pct.insurance.times(INSURED_SHARE).times(g.plus(origin).plus(freight))
-    : ZERO;
+  const needs = INCOTERM_ADDERS[a.incoterm];
+  const origin = needs.origin ? times(a.pct.origin, g) : ZERO;
+  const freight = needs.freight ? add(times(a.pct.freight, g), a.freightShare) : ZERO;
+  const carried = add(add(g, origin), freight);
+  const insuredRate = a.pct.insured ?? a.pct.insurance.times(INSURED_SHARE);
+  const insurance = needs.insurance ? times(insuredRate, carried) : ZERO;
   const cv = customsValue(a.incoterm, a.dutyBasis, { goods: g, origin, freight, insurance });
-  const duty = cv !== null && needsAdder(a.incoterm, 'duty') ? a.dutyRate.times(cv) : ZERO;
-  const fees = needsAdder(a.incoterm, 'fees') ? (a.feesShare ?? ZERO) : ZERO;
-  const destination = needsAdder(a.incoterm, 'destination') ? a.pct.destination.times(g) : ZERO;
+  const duty = cv !== null && needs.duty ? times(a.dutyRate, cv) : ZERO;
+  const fees = needs.fees && a.feesShare ? a.feesShare : ZERO;
+  const destination = needs.destination ? times(a.pct.destination, g) : ZERO;
   return {
     origin,
     freight,
@@ -58,7 +64,7 @@ export function lineAdders(a: AdderInput): LineAdders {
     duty,
     fees,
     destination,
-    landed: g.plus(origin).plus(freight).plus(insurance).plus(duty).plus(fees).plus(destination),
+    landed: add(add(add(add(carried, insurance), duty), fees), destination),
   };
 }
 

@@ -1,4 +1,5 @@
 import { Dec, decOr, pctToFraction, ZERO } from './decimal';
+import { INSURED_SHARE } from './landed';
 import { createDutyTable, type DutyTable } from './duty';
 import { CostingInputError } from './errors';
 import type { CurrencyCode, DutyBasis, FreightBasis, LandedCostProfile } from './types';
@@ -9,6 +10,8 @@ export interface PercentAdders {
   freight: Dec;
   insurance: Dec;
   destination: Dec;
+  /** insurance × 1.10, when precomputed. */
+  insured?: Dec;
 }
 
 /** A landed-cost profile parsed once: fractions instead of percent strings, defaults filled in. */
@@ -48,13 +51,15 @@ export function prepareProfile(p: LandedCostProfile): PreparedProfile {
     if (pct !== null && pct !== undefined && pct !== '') attrition.set(category, pctToFraction(pct, `attritionPct.${category}`));
   }
   const shipments = decOr(p.shipments, ZERO, 'shipments');
+  const insurance = nonNegative(pctToFraction(p.insurancePct, 'insurancePct'), 'insurancePct');
   if (!shipments.isInteger() || shipments.isNeg()) throw new CostingInputError('must be a whole number ≥ 0', 'shipments');
   return {
     currency: p.currency ?? null,
     pct: {
       origin: nonNegative(pctToFraction(p.originPct, 'originPct'), 'originPct'),
       freight: nonNegative(pctToFraction(p.freightPct, 'freightPct'), 'freightPct'),
-      insurance: nonNegative(pctToFraction(p.insurancePct, 'insurancePct'), 'insurancePct'),
+      insurance,
+      insured: insurance.times(INSURED_SHARE),
       destination: nonNegative(pctToFraction(p.destinationPct, 'destinationPct'), 'destinationPct'),
     },
     dutyBasis,

@@ -121,14 +121,19 @@ export type Page<T> = { items: T[]; nextCursor: string | null };
 
 /**
  * Reads a list to its end by following `nextCursor`. For the short lists of settings
- * (members, invites, tokens), where one screen shows every row.
+ * (members, invites, tokens), where one screen shows every row; `query` adds filters
+ * and a page size (the parts library reads thousands of rows in a few large pages).
  */
-export async function getAllPages<T>(path: string, signal?: AbortSignal): Promise<T[]> {
+export async function getAllPages<T>(
+  path: string,
+  signal?: AbortSignal,
+  query: Record<string, string | number | undefined> = {},
+): Promise<T[]> {
   const items: T[] = [];
   let cursor: string | undefined;
   // A guard against a server that keeps answering the same cursor.
   for (let pageCount = 0; pageCount < 100; pageCount += 1) {
-    const page = await api.get<Page<T>>(path, { query: { cursor }, signal });
+    const page = await api.get<Page<T>>(path, { query: { ...query, cursor }, signal });
     items.push(...page.items);
     if (!page.nextCursor || page.nextCursor === cursor) break;
     cursor = page.nextCursor;

@@ -1,14 +1,19 @@
-import { useRef, useState, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import {
   flexRender,
   getCoreRowModel,
+  getFilteredRowModel,
   getSortedRowModel,
   useReactTable,
+  type Column,
   type ColumnDef,
+  type ColumnFiltersState,
+  type FilterFn,
   type OnChangeFn,
   type RowData,
   type SortDirection,
   type SortingState,
+  type VisibilityState,
 } from '@tanstack/react-table';
 import { useVirtualizer } from '@tanstack/react-virtual';
 
@@ -21,8 +26,24 @@ declare module '@tanstack/react-table' {
     numeric?: boolean;
     /** Header text for screen readers only (an actions column still needs a name). */
     hiddenHeader?: boolean;
+    /** The column's name in words, for its filter box and the column chooser (default: the header text). */
+    label?: string;
   }
 }
+
+/** The column's name in words: `meta.label`, else a plain-text header, else its id. */
+export function columnLabel<T>(column: Column<T, unknown>): string {
+  const header = column.columnDef.header;
+  return column.columnDef.meta?.label ?? (typeof header === 'string' ? header : column.id);
+}
+
+/** Per-column text filter: the cell's value as text contains the typed words, any case. */
+const containsText: FilterFn<unknown> = (row, columnId, filterValue) => {
+  const wanted = String(filterValue ?? '').trim().toLowerCase();
+  if (!wanted) return true;
+  const value = row.getValue(columnId);
+  return String(value ?? '').toLowerCase().includes(wanted);
+};
 
 export type DataTableProps<T> = {
   /** The table's accessible name ("Members", "API tokens"). */
@@ -41,7 +62,47 @@ export type DataTableProps<T> = {
   virtualizeAbove?: number;
   /** Height of the scrolling body when virtualised. */
   maxHeight?: string;
+  /**
+   * Controlled per-column text filters (e.g. from `useUrlColumnFilters`); with them the
+   * table shows a filter box under each filterable header.
+   */
+  columnFilters?: ColumnFiltersState;
+  onColumnFiltersChange?: OnChangeFn<ColumnFiltersState>;
+  /** Controlled shown/hidden columns (e.g. from `useStoredColumnVisibility`). */
+  columnVisibility?: VisibilityState;
+  onColumnVisibilityChange?: OnChangeFn<VisibilityState>;
+  /** Extra classes for a row, e.g. to grey an expired quote. */
+  rowClassName?: (row: T) => string | undefined;
 };
+
+/**
+ * A filter box that keeps its own text while typing and hands it on once typing pauses,
+ * so ten thousand rows are filtered once per pause rather than once per key.
+ */
+function FilterInput({ label, value, onChange }: { label: string; value: string; onChange: (value: string) => void }) {
+  const [text, setText] = useState(value);
+  const latest = useRef(onChange);
+  useEffect(() => {
+    latest.current = onChange;
+  });
+  useEffect(() => {
+    if (text === value) return;
+    const timer = window.setTimeout(() => latest.current(text), 250);
+    return () => window.clearTimeout(timer);
+  }, [text, value]);
+  return (
+    <label className="block">
+      <span className="sr-only">Filter {label}</span>
+      <input
+        type="search"
+        value={text}
+        onChange={(event) => setText(event.target.value)}
+        placeholder="Filter"
+        className="h-7 w-full min-w-16 rounded border border-rule bg-surface px-2 text-xs font-normal tracking-normal text-ink normal-case placeholder:text-muted/60 hover:border-muted"
+      />
+    </label>
+  );
+}
 
 // A first guess for unseen rows; rendered rows are measured, so a taller row is fine.
 const ROW_HEIGHT = 40;
@@ -69,18 +130,32 @@ export function DataTable<T>({
   onSortingChange,
   virtualizeAbove = 100,
   maxHeight = '70vh',
+  columnFilters,
+  onColumnFiltersChange,
+  columnVisibility,
+  onColumnVisibilityChange,
+  rowClassName,
 }: DataTableProps<T>) {
   const [ownSorting, setOwnSorting] = useState<SortingState>([]);
   const sorting = sortingProp ?? ownSorting;
+  const filterable = columnFilters !== undefined && onColumnFiltersChange !== undefined;
 
   const table = useReactTable({
     data,
     columns,
     getRowId: (row) => getRowId(row),
-    state: { sorting },
+    state: {
+      sorting,
+      ...(filterable ? { columnFilters } : {}),
+      ...(columnVisibility ? { columnVisibility } : {}),
+    },
     onSortingChange: onSortingChange ?? setOwnSorting,
+    onColumnFiltersChange,
+    onColumnVisibilityChange,
+    defaultColumn: { filterFn: containsText as FilterFn<T> },
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
+    ...(filterable ? { getFilteredRowModel: getFilteredRowModel() } : {}),
   });
 
   const rows = table.getRowModel().rows;
@@ -102,6 +177,7 @@ export function DataTable<T>({
   const paddingBottom =
     virtualRows && virtualRows.length > 0 ? virtualizer.getTotalSize() - virtualRows[virtualRows.length - 1].end : 0;
   const columnCount = table.getVisibleLeafColumns().length;
+  const headerRows = filterable ? 2 : 1;
 
   return (
     <div
@@ -109,7 +185,7 @@ export function DataTable<T>({
       className="overflow-auto rounded-lg border border-rule bg-surface"
       style={virtualize ? { maxHeight } : undefined}
     >
-      <table aria-label={label} aria-rowcount={virtualize ? rows.length + 1 : undefined} className="w-full border-collapse text-sm">
+      <table aria-label={label} aria-rowcount={virtualize ? rows.length + headerRows : undefined} className="w-full border-collapse text-sm">
         <thead className="sticky top-0 z-10 bg-surface">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id} aria-rowindex={virtualize ? 1 : undefined}>
@@ -147,8 +223,30 @@ export function DataTable<T>({
               })}
             </tr>
           ))}
+          {filterable ? (
+            <tr aria-rowindex={virtualize ? 2 : undefined}>
+              {table.getVisibleLeafColumns().map((column) => (
+                <td key={column.id} className="border-b border-rule px-2 pb-2">
+                  {column.getCanFilter() && !column.columnDef.meta?.hiddenHeader ? (
+                    <FilterInput
+                      label={columnLabel(column)}
+                      value={String(column.getFilterValue() ?? '')}
+                      onChange={(text) => column.setFilterValue(text || undefined)}
+                    />
+                  ) : null}
+                </td>
+              ))}
+            </tr>
+          ) : null}
         </thead>
         <tbody>
+          {rows.length === 0 ? (
+            <tr>
+              <td colSpan={columnCount} className="px-3 py-6 text-center text-muted">
+                No rows match these filters.
+              </td>
+            </tr>
+          ) : null}
           {paddingTop > 0 ? (
             <tr aria-hidden="true">
               <td colSpan={columnCount} style={{ height: paddingTop, padding: 0 }} />
@@ -159,8 +257,8 @@ export function DataTable<T>({
               key={row.id}
               data-index={index}
               ref={virtualize ? virtualizer.measureElement : undefined}
-              aria-rowindex={virtualize ? index + 2 : undefined}
-              className="border-b border-rule/70 last:border-b-0 hover:bg-paper/60"
+              aria-rowindex={virtualize ? index + headerRows + 1 : undefined}
+              className={`border-b border-rule/70 last:border-b-0 hover:bg-paper/60 ${rowClassName?.(row.original) ?? ''}`}
             >
               {row.getVisibleCells().map((cell) => (
                 <td

@@ -10,6 +10,7 @@ import { supplierRoutes } from './suppliers/routes';
 import { quoteRoutes } from './quotes/routes';
 import { fxRoutes } from './fx/routes';
 import { profileRoutes } from './profiles/routes';
+import { bomRoutes } from './boms/routes';
 
 /**
  * The route table: every API route with its access rule and schemas, in one list.
@@ -27,5 +28,6 @@ export function routeTable(passport: PassportStatic): RouteDef[] {
     ...quoteRoutes,
     ...fxRoutes,
     ...profileRoutes,
+    ...bomRoutes,
   ];
 }

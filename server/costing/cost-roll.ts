@@ -222,8 +222,9 @@ interface Work {
   costPerUnit?: Dec;
   oneTimeCost?: Dec;
   fxRows: FxRateUsed[];
-  // Filled in the second pass.
+  // Filled in the second pass; `adders` is dropped once the line's output is written.
   adders?: LineAdders;
+  out?: CostRollLine;
   assembly: Dec;
   landed: Dec;
 }
@@ -441,6 +442,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   if (!N.isInteger() || N.lt(1)) throw new CostingInputError(`must be a whole number ≥ 1 (${buildQty})`, 'qty');
   const amortiseOver = p.amortisationQty ?? N;
   const warnings: RollWarning[] = [...p.staticWarnings];
+  const wantLines = options.lines !== false;
 
   const work: Work[] = p.lines.map((pl) => {
     const w: Work = {
@@ -529,6 +531,9 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     let c = byCategory.get(w.category);
     if (!c) byCategory.set(w.category, (c = emptySums()));
     addLine(c, w);
+    // Write the line's output now and let its decimals go: fewer long-lived objects.
+    if (wantLines) w.out = lineOutput(w, N);
+    w.adders = undefined;
   }
 
   // Totals from the category sums, in category order: the same figures, fewer additions.
@@ -576,10 +581,9 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
       landedPerUnit: perUnit(s.landed),
     }));
 
-  const lines: CostRollLine[] =
-    options.lines === false
-      ? []
-      : [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => lineOutput(w, N));
+  const lines: CostRollLine[] = wantLines
+    ? [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => w.out ?? lineOutput(w, N))
+    : [];
 
   return {
     qty: N.toNumber(),

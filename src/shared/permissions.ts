@@ -16,6 +16,7 @@ export const permissions = {
   'boms.write': ['owner', 'designer'],
   'boms.release': ['owner'],
   'lines.pin': ['owner', 'designer', 'buyer'],
+  'snapshots.write': ['owner', 'designer', 'buyer'],
   'parts.read': everyone,
   'parts.write': ['owner', 'designer'],
   'suppliers.read': everyone,

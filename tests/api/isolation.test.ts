@@ -35,7 +35,14 @@ beforeAll(async () => {
   ids['/api/landed-cost-profiles/:id'] = profile.id;
   ids['/api/fx-rates/:id'] = fx.body.id;
   ids['/api/files/:id'] = file.body.id;
+  const bom = await a.agent.post('/api/boms').send({ name: 'First torch', reportingCurrency: 'USD' }).expect(201);
+  const line = await a.agent.post(`/api/boms/${bom.body.id}/lines`).send({ partId: part.id, qtyPerUnit: '1' }).expect(201);
+  for (const path of ['/api/boms/:id', '/api/boms/:id/state', '/api/boms/:id/revisions', '/api/boms/:id/lines', '/api/boms/:id/lines/bulk', '/api/boms/:id/cost', '/api/boms/:id/cost/curve', '/api/boms/:id/shelf-ladder', '/api/boms/:id/import', '/api/boms/:id/snapshots']) ids[path] = bom.body.id;
+  ids['/api/boms/:id/lines/:lineId'] = `${bom.body.id}/lines/${line.body.id}`;
+  const snap = await a.agent.post(`/api/boms/${bom.body.id}/snapshots`).send({ name: 'first' }).expect(201);
+  snapshotId = snap.body.id;
 });
+let snapshotId = '';
 
 // A valid request apart from the id, so that only workspace scoping can answer 404.
 const bodies: Record<string, object> = {
@@ -44,6 +51,12 @@ const bodies: Record<string, object> = {
   'PATCH /api/suppliers/:id': { notes: 'changed', version: 1 },
   'PATCH /api/quotes/:id': { note: 'changed', version: 1 },
   'PATCH /api/landed-cost-profiles/:id': { notes: 'changed', version: 1 },
+  'PATCH /api/boms/:id': { notes: 'changed', version: 1 },
+  'POST /api/boms/:id/state': { state: 'in_review' },
+  'POST /api/boms/:id/lines': { qtyPerUnit: '1', kind: 'labour', unitCost: '0.01' },
+  'PATCH /api/boms/:id/lines/:lineId': { qtyPerUnit: '2', version: 1 },
+  'POST /api/boms/:id/lines/bulk': { create: [{ qtyPerUnit: '1', kind: 'labour', unitCost: '0.01' }] },
+  'POST /api/boms/:id/snapshots': { name: 'theirs' },
 };
 const queries: Record<string, object> = { 'GET /api/parts/:id/offers': { qty: 100 } };
 afterAll(async () => t.close());
@@ -55,7 +68,7 @@ describe('another workspace is unreachable', () => {
     for (const r of idRoutes()) {
       const id = ids[r.path];
       expect(id, `no record of the first workspace for ${r.path}: add one to this test`).toBeDefined();
-      const path = r.path.replace(/:[A-Za-z]+/, id);
+      const path = r.path.includes(':lineId') ? r.path.replace(/:id\/lines\/:lineId/, id) : r.path.replace(/:[A-Za-z]+/, id);
       const key = `${r.method.toUpperCase()} ${r.path}`;
       const req = b.agent[r.method](path).query(queries[key] ?? {});
       const res = r.bodyKind === 'multipart' ? await req.attach('file', tinyPdf, 'sheet.pdf') : await req.send(bodies[key]);
@@ -70,7 +83,9 @@ describe('another workspace is unreachable', () => {
   it('lists show none of the first workspace rows', async () => {
     const lists = routeTable(passport).filter((r) => r.method === 'get' && r.access !== 'public' && !/:[A-Za-z]+/.test(r.path));
     const firstIds = new Set([a.user.id, ...Object.values(ids)]);
-    for (const r of lists) {
+    // Comparing the first workspace's snapshot from the second is a 404 too.
+    await b.agent.get('/api/cost-compare').query({ left: `snapshot:${snapshotId}`, right: `snapshot:${snapshotId}` }).expect(404);
+    for (const r of lists.filter((x) => x.path !== '/api/cost-compare')) {
       const res = await b.agent.get(r.path);
       if (res.status === 403) continue; // the role may not list it at all
       expect(res.status, r.path).toBe(200);

@@ -1,0 +1,127 @@
+import type { Deps } from '../deps';
+import type { DbOrTrx } from '../db/knex';
+import { errors } from '../http/errors';
+import { costRoll, volumeCurve, shelfLadder, CostingInputError, type CostRollResult } from '../costing';
+import { today } from '../quotes/repository';
+import { loadCostingData, type CostingData } from './inputs';
+import { getBom, type BomRow } from './repository';
+
+function engine<T>(fn: () => T): T {
+  try {
+    return fn();
+  } catch (err) {
+    if (err instanceof CostingInputError) throw errors.validation(err.message);
+    throw err;
+  }
+}
+
+/** Names beside ids, so the client and the export need no second lookup. */
+function decorate(data: CostingData, result: CostRollResult) {
+  const parts = new Map(data.parts.map((p) => [p.id, p]));
+  const suppliers = new Map(data.input.suppliers.map((s) => [s.id, s.name ?? '']));
+  return {
+    ...result,
+    bomId: data.bom.id,
+    profileId: data.profile?.id ?? null,
+    profileName: data.profile?.name ?? null,
+    lines: result.lines.map((l) => {
+      const p = l.partId ? parts.get(l.partId) : undefined;
+      return { ...l, internalPn: p?.internalPn ?? null, mpn: p?.mpn ?? null, supplierName: l.supplierId ? suppliers.get(l.supplierId) ?? null : null };
+    }),
+    bySupplier: result.bySupplier.map((s) => ({ ...s, supplierName: suppliers.get(s.supplierId) ?? null })),
+  };
+}
+
+export type CostView = ReturnType<typeof decorate>;
+
+export async function costOf(db: DbOrTrx, workspaceId: string, bom: BomRow, qty?: number, date?: string): Promise<CostView> {
+  const d = date ?? today();
+  const data = await loadCostingData(db, workspaceId, bom, d);
+  const result = engine(() =>
+    costRoll({
+      ...data.input,
+      bom: { qty: qty ?? bom.plannedQty, date: d, reportingCurrency: bom.reportingCurrency, amortisationQty: bom.amortisationQty, targetUnitCost: bom.targetUnitCost },
+    }),
+  );
+  return decorate(data, result);
+}
+
+export async function curveOf(deps: Deps, workspaceId: string, bomId: string, quantities: number[] | undefined, date?: string) {
+  const bom = await getBom(deps.db, workspaceId, bomId);
+  const d = date ?? today();
+  const qs = quantities ?? defaultCurve(bom.plannedQty);
+  const data = await loadCostingData(deps.db, workspaceId, bom, d);
+  const curve = engine(() =>
+    volumeCurve({ ...data.input, bom: { qty: bom.plannedQty, date: d, reportingCurrency: bom.reportingCurrency, amortisationQty: bom.amortisationQty, targetUnitCost: bom.targetUnitCost } }, qs),
+  );
+  return { bomId, ...curve };
+}
+
+/** 12 quantities around the planned one, from a tenth to ten times it. */
+export function defaultCurve(planned: number): number[] {
+  const factors = [0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5, 2, 3, 5, 7.5, 10];
+  return [...new Set(factors.map((f) => Math.max(1, Math.round(planned * f))))];
+}
+
+export async function ladderOf(deps: Deps, workspaceId: string, bomId: string, qty?: number) {
+  const bom = await getBom(deps.db, workspaceId, bomId);
+  const shelf = bom.shelf ?? {};
+  if (!shelf.price) throw errors.validation('Set the shelf price of this BOM first.', [{ path: 'shelf.price', message: 'is required for the ladder' }]);
+  const cost = await costOf(deps.db, workspaceId, bom, qty);
+  const ladder = engine(() =>
+    shelfLadder({
+      price: shelf.price!, vatPct: shelf.vatPct ?? '0', retailerMarginPct: shelf.retailerMarginPct ?? '0', importerMarginPct: shelf.importerMarginPct ?? '0',
+      freightToStorePerUnit: shelf.freightToStorePerUnit ?? '0', landedPerUnit: cost.totals.landedPerUnit,
+    }),
+  );
+  return { bomId, qty: cost.qty, currency: bom.reportingCurrency, shelf, ...ladder, leftOut: cost.leftOut.count };
+}
+
+/**
+ * The stored roll-up of each BOM at its planned quantity and today's date. A roll-up is
+ * fresh while the workspace's costing epoch (bumped by triggers on every input) and the
+ * date and quantity still match; stale ones are recomputed here and stored again.
+ */
+export async function rollupsFor(db: DbOrTrx, workspaceId: string, boms: BomRow[]) {
+  const ws = await db('workspaces').where({ id: workspaceId }).first('costingEpoch');
+  const epoch = String(ws?.costingEpoch ?? 0);
+  const d = today();
+  const stored = boms.length
+    ? ((await db('cost_rollups').where({ workspaceId }).andWhereRaw('bom_id = ANY(?::bigint[])', [boms.map((b) => b.id)])) as RollupRow[])
+    : [];
+  const byBom = new Map(stored.map((r) => [r.bomId, r]));
+  const out = new Map<string, RollupRow>();
+  for (const bom of boms) {
+    const r = byBom.get(bom.id);
+    if (r && String(r.epoch) === epoch && r.costingDate === d && r.qty === bom.plannedQty) {
+      out.set(bom.id, r);
+      continue;
+    }
+    const cost = await costOf(db, workspaceId, bom);
+    const row: RollupRow = {
+      bomId: bom.id, workspaceId, epoch, costingDate: d, qty: bom.plannedQty, currency: bom.reportingCurrency,
+      landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
+      warnings: cost.warnings.length + cost.lines.reduce((n, l) => n + l.warnings.length, 0), totals: cost.totals,
+    };
+    await db('cost_rollups')
+      .insert({ ...row, totals: JSON.stringify(row.totals) })
+      .onConflict('bom_id')
+      .merge();
+    out.set(bom.id, row);
+  }
+  return out;
+}
+
+export interface RollupRow {
+  bomId: string;
+  workspaceId: string;
+  epoch: string;
+  costingDate: string;
+  qty: number;
+  currency: string;
+  landedPerUnit: string | null;
+  targetUnitCost: string | null;
+  leftOut: number;
+  warnings: number;
+  totals: unknown;
+}

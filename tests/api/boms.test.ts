@@ -1,0 +1,190 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startTestApp, signUp, type TestApp } from '../helpers/app';
+import { snapshot } from '../helpers/db';
+import { workspaceWithEveryRole, type RoleWorkspace } from '../helpers/roles';
+import { makePart, makeSupplier, makeQuote, makeProfile } from '../helpers/factories';
+
+let t: TestApp;
+let ws: RoleWorkspace;
+let partA: { id: string };
+let partB: { id: string };
+let quoteA: { id: string; version: number };
+let profile: { id: string };
+
+beforeAll(async () => {
+  t = await startTestApp();
+  ws = await workspaceWithEveryRole(t, 'BOM Co');
+  const owner = ws.agents.owner;
+  const s = await makeSupplier(owner, { currency: 'USD', country: 'US', defaultIncoterm: 'DDP' });
+  partA = await makePart(owner, { internalPn: 'A-10K', mpn: 'MPN-A' });
+  partB = await makePart(owner, { internalPn: 'B-CAP', mpn: 'MPN-B', category: 'capacitor', ratings: {} });
+  // All-units tiers of the reference's worked example [QTY-DISC]: 1+ 0.0100 … 10,000+ 0.0008.
+  quoteA = await makeQuote(owner, partA.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [
+    { minQty: 1, unitPrice: '0.0100' }, { minQty: 100, unitPrice: '0.0050' }, { minQty: 1000, unitPrice: '0.0020' }, { minQty: 5000, unitPrice: '0.0012' }, { minQty: 10000, unitPrice: '0.0008' },
+  ] });
+  await makeQuote(owner, partB.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0150' }] });
+  profile = await makeProfile(owner, { currency: 'USD' });
+});
+afterAll(async () => t.close());
+
+async function newBom(over: Record<string, unknown> = {}) {
+  const res = await ws.agents.designer.post('/api/boms').send({ name: `Torch ${Date.now()}`, reportingCurrency: 'USD', profileId: profile.id, plannedQty: 1000, ...over }).expect(201);
+  return res.body as { id: string; version: number; revision: number };
+}
+
+describe('BOMs, lines and the cost roll', () => {
+  it('a designer builds a BOM; the cost roll answers in the contract shape', async () => {
+    const bom = await newBom({ targetUnitCost: '0.05' });
+    const d = ws.agents.designer;
+    await d.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R1-R4', partId: partA.id, qtyPerUnit: '4' }).expect(201);
+    await d.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'C1', partId: partB.id, qtyPerUnit: 1 }).expect(201);
+    await d.post(`/api/boms/${bom.id}/lines`).send({ kind: 'tooling', note: 'Housing mould', oneTimeCost: '300', currency: 'USD', qtyPerUnit: '1' }).expect(201);
+    const cost = await d.get(`/api/boms/${bom.id}/cost`).query({ qty: 1000 }).expect(200);
+    expect(Object.keys(cost.body)).toEqual(expect.arrayContaining(['qty', 'date', 'currency', 'lines', 'totals', 'byCategory', 'bySupplier', 'warnings', 'leftOut']));
+    for (const key of ['lineId', 'refDes', 'partId', 'quoteId', 'supplierId', 'requiredQty', 'orderQty', 'unitPrice', 'unitPriceCurrency', 'goodsValue', 'excessValue', 'origin', 'freight', 'insurance', 'duty', 'fees', 'destination', 'assembly', 'landed', 'landedPerUnit', 'warnings']) {
+      expect(cost.body.lines[0], key).toHaveProperty(key);
+    }
+    for (const key of ['goods', 'excessValue', 'origin', 'freight', 'insurance', 'duty', 'fees', 'destination', 'assembly', 'costLinesPerUnit', 'oneTimePerUnit', 'landedTotal', 'landedPerUnit', 'targetUnitCost', 'gapToTarget']) {
+      expect(cost.body.totals, key).toHaveProperty(key);
+    }
+    const r = cost.body.lines.find((l: { refDes: string }) => l.refDes === 'R1-R4');
+    // 4,000 needed at 0.0020 = 8.00 against 5,000 at 0.0012 = 6.00: buying up to the break wins [QTY-DISC].
+    expect(r).toMatchObject({ requiredQty: 4000, orderQty: 5000, goodsValue: '6.000000' });
+    // 6.00 + 15.00 + 300 one-time, over 1,000 units (DDP: no adders) = 0.321 per unit.
+    expect(Number(cost.body.totals.landedPerUnit)).toBeCloseTo(0.321, 9);
+    expect(Number(cost.body.totals.gapToTarget)).toBeCloseTo(0.271, 9);
+
+    const curve = await d.get(`/api/boms/${bom.id}/cost/curve`).query({ qty: '1000,5000,10000' }).expect(200);
+    expect(curve.body.points.map((p: { qty: number }) => p.qty)).toEqual([1000, 5000, 10000]);
+    const perUnit = curve.body.points.map((p: { totals: { landedPerUnit: string } }) => Number(p.totals.landedPerUnit));
+    expect(perUnit[2]).toBeLessThan(perUnit[0]);
+  });
+
+  it('lines left out are counted and named, never costed at zero silently', async () => {
+    const bom = await newBom();
+    const orphan = await makePart(ws.agents.owner, { internalPn: `NOQ-${Date.now()}` });
+    await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R9', partId: orphan.id, qtyPerUnit: '1' }).expect(201);
+    const cost = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).expect(200);
+    expect(cost.body.leftOut.count).toBe(1);
+    expect(cost.body.leftOut.lines[0].reason).toBe('no_quote');
+  });
+
+  it('bulk edits apply in one transaction: one stale version and nothing changes', async () => {
+    const bom = await newBom();
+    const d = ws.agents.designer;
+    const a = (await d.post(`/api/boms/${bom.id}/lines`).send({ partId: partA.id, qtyPerUnit: '1', refDes: 'R1' }).expect(201)).body;
+    const b = (await d.post(`/api/boms/${bom.id}/lines`).send({ partId: partB.id, qtyPerUnit: '1', refDes: 'C1' }).expect(201)).body;
+    const before = await snapshot(t.database.db);
+    await d.post(`/api/boms/${bom.id}/lines/bulk`).send({
+      create: [{ partId: partA.id, qtyPerUnit: '2', refDes: 'R2 R3' }],
+      update: [{ id: a.id, version: a.version, qtyPerUnit: '3' }, { id: b.id, version: b.version + 5, qtyPerUnit: '9' }],
+    }).expect(409);
+    expect(await snapshot(t.database.db)).toEqual(before);
+    const ok = await d.post(`/api/boms/${bom.id}/lines/bulk`).send({
+      create: [{ partId: partA.id, qtyPerUnit: '2', refDes: 'R2 R3' }],
+      update: [{ id: a.id, version: a.version, qtyPerUnit: '3' }],
+      delete: [{ id: b.id, version: b.version }],
+    }).expect(200);
+    expect(ok.body.created).toHaveLength(1);
+    expect((await d.get(`/api/boms/${bom.id}/lines`)).body.items).toHaveLength(2);
+  });
+
+  it('a line from another workspace, or a quote for another part, cannot be pinned or used', async () => {
+    const bom = await newBom();
+    const other = await signUp(t);
+    const foreign = await makePart(other.agent);
+    await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: foreign.id, qtyPerUnit: '1' }).expect(400);
+    const line = (await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: partB.id, qtyPerUnit: '1' }).expect(201)).body;
+    await ws.agents.buyer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ pinnedQuoteId: quoteA.id, version: line.version }).expect(400);
+  });
+
+  it('a buyer may pin a quote on a line but not change its quantity', async () => {
+    const bom = await newBom();
+    const line = (await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: partA.id, qtyPerUnit: '1' }).expect(201)).body;
+    await ws.agents.buyer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ qtyPerUnit: '2', version: line.version }).expect(403);
+    const pinned = await ws.agents.buyer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ pinnedQuoteId: quoteA.id, version: line.version }).expect(200);
+    expect(pinned.body.pinnedQuoteId).toBe(quoteA.id);
+    await ws.agents.viewer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ pinnedQuoteId: null, version: pinned.body.version }).expect(403);
+  });
+});
+
+describe('states and revisions', () => {
+  it('Draft → In review → Released by an owner only; released is read-only; a new revision copies the lines', async () => {
+    const bom = await newBom();
+    const d = ws.agents.designer;
+    await d.post(`/api/boms/${bom.id}/lines`).send({ partId: partA.id, qtyPerUnit: '2', refDes: 'R1 R2' }).expect(201);
+    await d.post(`/api/boms/${bom.id}/state`).send({ state: 'released' }).expect(409);
+    await d.post(`/api/boms/${bom.id}/state`).send({ state: 'in_review' }).expect(200);
+    const denied = await d.post(`/api/boms/${bom.id}/state`).send({ state: 'released' }).expect(403);
+    expect(denied.body.error.message).toMatch(/owner/);
+    const released = await ws.agents.owner.post(`/api/boms/${bom.id}/state`).send({ state: 'released' }).expect(200);
+    expect(released.body.state).toBe('released');
+    expect(released.body.releasedAt).not.toBeNull();
+
+    const blocked = await d.post(`/api/boms/${bom.id}/lines`).send({ partId: partA.id, qtyPerUnit: '1' }).expect(409);
+    expect(blocked.body.error.message).toMatch(/released and read-only; make a new revision/);
+    await d.patch(`/api/boms/${bom.id}`).send({ name: 'x', version: released.body.version }).expect(409);
+    await d.post(`/api/boms/${bom.id}/state`).send({ state: 'draft' }).expect(409);
+
+    const next = await d.post(`/api/boms/${bom.id}/revisions`).expect(201);
+    expect(next.body).toMatchObject({ revision: 2, state: 'draft' });
+    const lines = await d.get(`/api/boms/${next.body.id}/lines`).expect(200);
+    expect(lines.body.items).toHaveLength(1);
+    expect(lines.body.items[0]).toMatchObject({ refDes: 'R1 R2', qtyPerUnit: '2' });
+    const detail = await d.get(`/api/boms/${next.body.id}`).expect(200);
+    expect(detail.body.revisions.map((r: { revision: number }) => r.revision)).toEqual([1, 2]);
+    const log = await ws.agents.owner.get('/api/audit').expect(200);
+    expect(log.body.items.some((e: { action: string; entityId: string }) => e.action === 'state' && e.entityId === bom.id)).toBe(true);
+  });
+});
+
+describe('BOM import', () => {
+  it('matches rows by MPN or internal PN, keeps unmatched rows as unresolved lines, all in one commit', async () => {
+    const bom = await newBom();
+    const csv = ['Designator,Qty,Manufacturer PN,Our PN,Description', '"R1,R2,R3,R4",4,MPN-A,,10k', 'C1,1,,B-CAP,2n2', 'U1,1,NOT-IN-LIBRARY,,Timer IC'].join('\n');
+    const preview = await ws.agents.designer.post(`/api/boms/${bom.id}/import`).attach('file', Buffer.from(csv), 'bom.csv').expect(200);
+    expect(preview.body).toMatchObject({ totalRows: 3, problemRows: 0, matchedRows: 2, unresolvedRows: 1 });
+    expect((await ws.agents.designer.get(`/api/boms/${bom.id}/lines`)).body.items).toHaveLength(0);
+    await ws.agents.designer.post(`/api/boms/${bom.id}/import`).query({ commit: 'true' }).attach('file', Buffer.from(csv), 'bom.csv').expect(200);
+    const lines = (await ws.agents.designer.get(`/api/boms/${bom.id}/lines`)).body.items;
+    expect(lines).toHaveLength(3);
+    expect(lines.find((l: { refDes: string }) => l.refDes === 'U1')).toMatchObject({ partId: null, unresolved: 'NOT-IN-LIBRARY' });
+    expect(lines.find((l: { refDes: string }) => l.refDes === 'R1,R2,R3,R4')).toMatchObject({ partId: partA.id, qtyPerUnit: '4' });
+  });
+
+  it('a bad row blocks the commit and nothing is written', async () => {
+    const bom = await newBom();
+    const before = await snapshot(t.database.db);
+    const csv = ['Designator,Qty,MPN', 'R1,1,MPN-A', 'R2,-3,MPN-A', 'R5-R2,1,MPN-A'].join('\n');
+    const res = await ws.agents.designer.post(`/api/boms/${bom.id}/import`).query({ commit: 'true' }).attach('file', Buffer.from(csv), 'bom.csv').expect(400);
+    expect(res.body.error.details.map((d: { path: string }) => d.path)).toEqual(['row 3.qtyPerUnit', 'row 4.refDes']);
+    expect(await snapshot(t.database.db)).toEqual(before);
+  });
+});
+
+describe('the stored roll-up', () => {
+  it('the BOM list reads the landed cost at the planned quantity and it follows a quote change', async () => {
+    const bom = await newBom({ plannedQty: 1000 });
+    await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: partB.id, qtyPerUnit: '1' }).expect(201);
+    const first = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id);
+    expect(first.cost.landedPerUnit).toBe('0.0150000000');
+    const stored = await t.database.db('cost_rollups').where({ bomId: bom.id }).first();
+    expect(stored.landedPerUnit).toBe('0.0150000000');
+    const q = (await ws.agents.owner.get('/api/quotes').query({ partId: partB.id })).body.items[0];
+    await ws.agents.buyer.patch(`/api/quotes/${q.id}`).send({ version: q.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0120' }] }).expect(200);
+    const second = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id);
+    expect(second.cost.landedPerUnit).toBe('0.0120000000');
+  });
+
+  it('snapshots and revisions compare per line and in totals', async () => {
+    const bom = await newBom({ plannedQty: 1000 });
+    await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'C1', partId: partB.id, qtyPerUnit: '1' }).expect(201);
+    const snap = await ws.agents.buyer.post(`/api/boms/${bom.id}/snapshots`).send({ name: 'before cost-down' }).expect(201);
+    const line = (await ws.agents.designer.get(`/api/boms/${bom.id}/lines`)).body.items[0];
+    await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ version: line.version, partId: partA.id }).expect(200);
+    const cmp = await ws.agents.viewer.get('/api/cost-compare').query({ left: `snapshot:${snap.body.id}`, right: `bom:${bom.id}` }).expect(200);
+    expect(cmp.body.lines[0]).toMatchObject({ refDes: 'C1', change: 'part_changed' });
+    const perUnit = cmp.body.totals.find((x: { name: string }) => x.name === 'landedPerUnit');
+    expect(Number(perUnit.change)).toBeLessThan(0);
+  });
+});

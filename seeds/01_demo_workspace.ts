@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { hashPassword } from '../server/auth/passwords';
+import { seedStressPolicies } from '../server/stress/seed-policies';
 
 /**
  * DEMO DATA — the invented importer Tinbell Gadgets and one login per role.
@@ -19,7 +20,9 @@ export async function seed(knex: Knex): Promise<void> {
   if (existing) return;
   const passwordHash = await hashPassword(demoPassword);
   await knex.transaction(async (trx) => {
-    const [ws] = await trx('workspaces').insert({ name: demoWorkspaceName }).returning('id');
+    // The demo shows every feature, so it runs on the Factory plan.
+    const [ws] = await trx('workspaces').insert({ name: demoWorkspaceName, plan: 'factory', billingStatus: 'active' }).returning('id');
+    await seedStressPolicies(trx, ws.id);
     for (const login of demoLogins) {
       const [user] = await trx('users')
         .insert({ email: login.email, name: login.name, passwordHash })

@@ -19,6 +19,8 @@ import { errors } from './http/errors';
 import { buildOpenApi } from './http/openapi';
 import { routeTable } from './routes';
 import { createObjectStore, type ObjectStore } from './files/object-store';
+import type Stripe from 'stripe';
+import { createStripe } from './billing/stripe-client';
 
 export interface AppOptions {
   db: Knex;
@@ -26,6 +28,7 @@ export interface AppOptions {
   mailer?: Mailer;
   logger?: Logger;
   store?: ObjectStore;
+  stripe?: Stripe;
 }
 
 export interface FarthingApp {
@@ -47,7 +50,8 @@ export function createApp(opts: AppOptions): FarthingApp {
   const store =
     opts.store ??
     createObjectStore({ endpoint: config.S3_ENDPOINT, region: config.S3_REGION, bucket: config.S3_BUCKET, accessKeyId: config.S3_ACCESS_KEY_ID, secretAccessKey: config.S3_SECRET_ACCESS_KEY });
-  const deps: Deps = { db, config, mailer, logger, store };
+  const stripe = opts.stripe ?? createStripe(config);
+  const deps: Deps = { db, config, mailer, logger, store, stripe };
   const passport = configurePassport(db);
   const sessions = createSessionMiddleware(config, logger);
   const routes = routeTable(passport);
@@ -75,6 +79,8 @@ export function createApp(opts: AppOptions): FarthingApp {
   );
 
   const api = express.Router();
+  // The payment webhook is verified over its exact bytes, so it skips JSON parsing.
+  api.use('/billing/webhook', express.raw({ type: '*/*', limit: '1mb' }));
   api.use(express.json({ limit: '1mb', strict: true }));
   api.use(sessions.middleware);
   api.use(passport.initialize());

@@ -25,6 +25,11 @@ const schema = z.object({
   S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   MAX_DATASHEET_MB: z.coerce.number().min(1).max(200).default(20),
+  STRIPE_SECRET_KEY: z.string().default('sk_test_farthing_local'),
+  STRIPE_WEBHOOK_SECRET: z.string().default('whsec_farthing_local'),
+  /** Points the official SDK at our local fake; unset with real keys. */
+  STRIPE_API_URL: z.string().url().optional(),
+  BILLING_GRACE_DAYS: z.coerce.number().int().min(0).max(60).default(7),
   MAX_IMPORT_MB: z.coerce.number().min(1).max(200).default(10),
 });
 

@@ -3,6 +3,7 @@ import type { Logger } from 'pino';
 import type { Config } from './config';
 import type { Mailer } from './mail/mailer';
 import type { ObjectStore } from './files/object-store';
+import type Stripe from 'stripe';
 
 /** What every route and service may use; built once in createApp. */
 export interface Deps {
@@ -11,4 +12,5 @@ export interface Deps {
   mailer: Mailer;
   logger: Logger;
   store: ObjectStore;
+  stripe: Stripe;
 }

@@ -11,6 +11,9 @@ import { quoteRoutes } from './quotes/routes';
 import { fxRoutes } from './fx/routes';
 import { profileRoutes } from './profiles/routes';
 import { bomRoutes } from './boms/routes';
+import { stressRoutes } from './stress/routes';
+import { toolRoutes } from './tools/routes';
+import { billingRoutes } from './billing/routes';
 
 /**
  * The route table: every API route with its access rule and schemas, in one list.
@@ -29,5 +32,8 @@ export function routeTable(passport: PassportStatic): RouteDef[] {
     ...fxRoutes,
     ...profileRoutes,
     ...bomRoutes,
+    ...stressRoutes,
+    ...toolRoutes,
+    ...billingRoutes,
   ];
 }

@@ -6,6 +6,7 @@ import { hashPassword } from './passwords';
 import { newSecret, hashSecret } from './secret-tokens';
 import { resetMail } from '../mail/templates';
 import { audit } from '../audit/repository';
+import { seedStressPolicies } from '../stress/seed-policies';
 import type { Role } from '../../src/shared/schemas/common';
 import type { SignupBody } from '../../src/shared/schemas/auth';
 
@@ -41,6 +42,7 @@ export async function signup(deps: Deps, body: SignupBody): Promise<{ userId: st
     const user = await usersRepo.create(trx, { email: body.email, name: body.name, passwordHash });
     const ws = await usersRepo.createWorkspace(trx, body.workspaceName);
     await usersRepo.addMember(trx, ws.id, user.id, 'owner');
+    await seedStressPolicies(trx, ws.id);
     await audit(trx, { workspaceId: ws.id, userId: user.id, action: 'create', entity: 'workspace', entityId: ws.id, changes: { name: ws.name } });
     return { userId: user.id, workspaceId: ws.id };
   });

@@ -2,14 +2,15 @@ import type { Deps } from '../deps';
 import type { Auth } from '../http/route';
 import type { DbOrTrx, Trx } from '../db/knex';
 import type { BomRow } from './repository';
+import { stressTallies, assertReleasable } from '../stress/service';
+import { assertAllowed } from '../billing/plan';
 
 /**
- * Hooks other areas plug into BOMs without the BOM code knowing them: the stress check
- * (tally on the list, veto on release) and the plan limits (on create). Each defaults to
- * doing nothing.
+ * What other areas say about a BOM's life: the stress tally on the list, the stress
+ * veto on release, and (with plans) the limit on creating BOMs.
  */
 export const releaseGuards = {
-  tallies: async (_deps: Deps, _workspaceId: string, _boms: BomRow[]): Promise<Map<string, unknown>> => new Map(),
-  beforeRelease: async (_trx: Trx, _deps: Deps, _auth: Auth, _bom: BomRow): Promise<void> => undefined,
-  beforeCreate: async (_db: DbOrTrx, _deps: Deps, _auth: Auth): Promise<void> => undefined,
+  tallies: (deps: Deps, workspaceId: string, boms: BomRow[]) => stressTallies(deps.db, workspaceId, boms),
+  beforeRelease: (trx: Trx, deps: Deps, auth: Auth, bom: BomRow) => assertReleasable(trx, deps, auth, bom),
+  beforeCreate: (db: DbOrTrx, deps: Deps, auth: Auth) => assertAllowed(db, auth.workspaceId, deps.config.BILLING_GRACE_DAYS, 'boms'),
 };

@@ -4,7 +4,7 @@ import type { DutyMatch } from './duty';
 import { createFxIndex, type FxIndex, type FxLookup } from './fx';
 import { needsAdder } from './incoterms';
 import { lineAdders, type LineAdders } from './landed';
-import { requiredQty } from './order-quantity';
+import { requiredQty, toCount } from './order-quantity';
 import { prepareProfile, type PreparedProfile } from './profile';
 import {
   compareQuotes,
@@ -210,12 +210,12 @@ interface Work {
   warnings: LineWarning[];
   category: string;
   part?: Part;
-  required?: Dec;
+  required?: number;
   chosen?: PricedQuote;
   /** The chosen quote's goods value G in the reporting currency. */
   goods?: Dec;
   duty?: DutyMatch;
-  excessQty?: Dec;
+  excessQty?: number;
   excessValue?: Dec;
   weight?: Dec;
   assemblyPerUnit: Dec;
@@ -266,7 +266,7 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
   w.part = part;
   w.category = part.category;
   const attrition = pl.attrition ?? p.profile.attrition.get(part.category) ?? ZERO;
-  const required = requiredQty(pl.qtyPerUnit, buildQty, attrition);
+  const required = toCount(requiredQty(pl.qtyPerUnit, buildQty, attrition), `lines.${pl.index}.requiredQty`);
   w.required = required;
   const duty = p.profile.duty.match(part.hsCode);
   w.duty = duty;
@@ -318,7 +318,7 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
     if (part.unitWeightG === null || part.unitWeightG === undefined || part.unitWeightG === '') {
       return leaveOut(w, 'missing_weight', part.id);
     }
-    w.weight = chosen.order.orderQty.times(dec(part.unitWeightG, `parts.${part.id}.unitWeightG`));
+    w.weight = dec(part.unitWeightG, `parts.${part.id}.unitWeightG`).times(chosen.order.orderQty);
   }
 
   if (p.assemblyRates.ok) {
@@ -511,8 +511,8 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
       });
       w.assembly = w.assemblyPerUnit.isZero() ? ZERO : w.assemblyPerUnit.times(N);
       w.landed = add(w.adders.landed, w.assembly);
-      w.excessQty = c.order.orderQty.minus(w.required!);
-      const excessInQuote = w.excessQty.times(c.order.unitPrice);
+      w.excessQty = c.order.orderQty - w.required!;
+      const excessInQuote = c.order.unitPrice.times(w.excessQty);
       w.excessValue = c.fx.route === 'same' ? excessInQuote : excessInQuote.times(c.fx.rate);
       const supplierId = c.pq.quote.supplierId;
       let s = bySupplier.get(supplierId);
@@ -636,9 +636,9 @@ function lineOutput(w: Work, N: Dec): CostRollLine {
     quoteId: c ? c.pq.quote.id : null,
     supplierId: c ? c.pq.quote.supplierId : null,
     incoterm: c ? c.pq.incoterm : null,
-    requiredQty: w.required ? w.required.toNumber() : null,
-    orderQty: c ? c.order.orderQty.toNumber() : null,
-    excessQty: w.excessQty ? w.excessQty.toNumber() : null,
+    requiredQty: w.required ?? null,
+    orderQty: c ? c.order.orderQty : null,
+    excessQty: w.excessQty ?? null,
     unitPrice: c ? perUnitText(c.order.unitPrice) : null,
     unitPriceCurrency: c ? c.pq.quote.currency : null,
     unitPriceConverted: c ? perUnitText(c.order.unitPrice.times(c.fx.rate)) : null,

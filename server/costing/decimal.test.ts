@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { ceilToMultiple, dec, moneyText, perUnitText, roundHalfUp, roundMoney } from './decimal';
+import { ceilInt, dec, moneyText, perUnitText, roundHalfUp, roundMoney } from './decimal';
 import { CostingInputError } from './errors';
-import { chooseOrder, prepareOrderTerms } from './order-quantity';
+import { ceilToMultipleCount, chooseOrder, prepareOrderTerms } from './order-quantity';
 import { breaks } from './test-factories';
 
 describe('half-up rounding', () => {
@@ -38,7 +38,7 @@ describe('half-up rounding', () => {
 
 describe('multiply first, round once (common practice)', () => {
   const extended = (qty: number, unitPrice: string) =>
-    chooseOrder(prepareOrderTerms(breaks([1, unitPrice]), 1, 1), dec(qty)).goodsValue;
+    chooseOrder(prepareOrderTerms(breaks([1, unitPrice]), 1, 1), qty).goodsValue;
 
   it('10,000 × 0.0008 USD = 8.00; rounding the unit price first would give 0.00 (#35) cp, local', () => {
     expect(roundMoney(extended(10_000, '0.0008'), 'USD').toFixed(2)).toBe('8.00');
@@ -74,10 +74,11 @@ describe('parsing and helpers', () => {
     expect(() => dec(Number.NaN)).toThrow(CostingInputError);
   });
 
-  it('rounds up to a multiple', () => {
-    expect(ceilToMultiple(dec(1000), dec(300)).toString()).toBe('1200');
-    expect(ceilToMultiple(dec(1200), dec(300)).toString()).toBe('1200');
-    expect(ceilToMultiple(dec('4.2'), dec(1)).toString()).toBe('5');
+  it('rounds up to a whole number and to a multiple', () => {
+    expect(ceilInt(dec('4.2')).toString()).toBe('5');
+    expect(ceilInt(dec('4')).toString()).toBe('4');
+    expect(ceilToMultipleCount(1000, 300)).toBe(1200);
+    expect(ceilToMultipleCount(1200, 300)).toBe(1200);
   });
 
   it('prints money to 6 decimals and per-unit figures to 10, never "-0"', () => {

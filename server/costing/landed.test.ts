@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { dec, ZERO } from './decimal';
-import { INCOTERMS } from './incoterms';
+import { customsValue, INCOTERMS } from './incoterms';
 import { boardLandedFactor, INSURED_SHARE, lineAdders } from './landed';
 
 const pct = { origin: dec('0.02'), freight: dec('0.05'), insurance: dec('0.003'), destination: dec('0.01') };
@@ -41,6 +41,16 @@ describe('landed-cost adders on one line', () => {
     expect([dap.freight, dap.insurance, dap.destination].every((x) => x.isZero())).toBe(true);
     expect(dap.duty.toString()).toBe('100');
     expect(dap.fees.toString()).toBe('25');
+  });
+
+  it('reports the customs value of the customs-value table for every rule and basis', () => {
+    for (const rule of INCOTERMS) {
+      for (const basis of ['CIF', 'FOB'] as const) {
+        const a = lineAdders({ goods: dec('1000'), incoterm: rule, pct, dutyBasis: basis, dutyRate: dec('0.05'), freightShare: dec(40), feesShare: dec(9) });
+        const table = customsValue(rule, basis, { goods: dec('1000'), origin: a.origin, freight: a.freight, insurance: a.insurance });
+        expect(a.customsValue?.toString() ?? null, `${rule}/${basis}`).toBe(table?.toString() ?? null);
+      }
+    }
   });
 
   it('the board factor times G equals the explicit landed cost for every rule', () => {

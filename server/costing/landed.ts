@@ -52,7 +52,11 @@ export function lineAdders(a: AdderInput): LineAdders {
   const carried = add(add(g, origin), freight);
   const insuredRate = a.pct.insured ?? a.pct.insurance.times(INSURED_SHARE);
   const insurance = needs.insurance ? times(insuredRate, carried) : ZERO;
-  const cv = customsValue(a.incoterm, a.dutyBasis, { goods: g, origin, freight, insurance });
+  const cif = add(carried, insurance);
+  // Under the CIF basis the customs value is every cost up to the border, and the adders a
+  // rule does not need are 0 here, so it equals G + origin + freight + insurance (the test
+  // checks this against the customs-value table for every rule); the FOB basis reads the table.
+  const cv = a.incoterm === 'DDP' ? null : a.dutyBasis === 'CIF' ? cif : customsValue(a.incoterm, a.dutyBasis, { goods: g, origin, freight, insurance });
   const duty = cv !== null && needs.duty ? times(a.dutyRate, cv) : ZERO;
   const fees = needs.fees && a.feesShare ? a.feesShare : ZERO;
   const destination = needs.destination ? times(a.pct.destination, g) : ZERO;
@@ -64,7 +68,7 @@ export function lineAdders(a: AdderInput): LineAdders {
     duty,
     fees,
     destination,
-    landed: add(add(add(add(carried, insurance), duty), fees), destination),
+    landed: add(add(add(cif, duty), fees), destination),
   };
 }
 

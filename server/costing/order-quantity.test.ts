@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { dec, Dec } from './decimal';
 import { CostingInputError } from './errors';
-import { chooseOrder, prepareOrderTerms, priceAt, requiredQty, type OrderTerms } from './order-quantity';
+import { chooseOrder, prepareOrderTerms, priceAt, requiredQty, toCount, type OrderTerms } from './order-quantity';
 import { breaks } from './test-factories';
 
 // Reference §4.4 tiers: 1+ 0.0100; 100+ 0.0050; 1,000+ 0.0020; 5,000+ 0.0012; 10,000+ 0.0008 USD.
@@ -10,18 +10,13 @@ const TIERS = breaks([1, '0.0100'], [100, '0.0050'], [1000, '0.0020'], [5000, '0
 const tiered = prepareOrderTerms(TIERS, 1, 1);
 
 const order = (terms: OrderTerms, need: number) => {
-  const o = chooseOrder(terms, dec(need));
-  return {
-    orderQty: o.orderQty.toNumber(),
-    unitPrice: o.unitPrice.toString(),
-    goods: o.goodsValue.toFixed(4),
-    excess: o.excessQty.toNumber(),
-  };
+  const o = chooseOrder(terms, need);
+  return { orderQty: o.orderQty, unitPrice: o.unitPrice.toString(), goods: o.goodsValue.toFixed(4), excess: o.excessQty };
 };
 
 describe('all-units price breaks [QTY-DISC]', () => {
   it('prices 4,500 at the 1,000+ tier: unit 0.0020, extended 9.00 (#14) [QTY-DISC] local', () => {
-    const price = priceAt(tiered, dec(4500))!;
+    const price = priceAt(tiered, 4500)!;
     expect(price.toString()).toBe('0.002');
     expect(price.times(4500).toFixed(2)).toBe('9.00');
   });
@@ -42,7 +37,7 @@ describe('all-units price breaks [QTY-DISC]', () => {
   });
 
   it('prices 99 pieces at the first tier: unit 0.0100, extended 0.99 (#17) [QTY-DISC]', () => {
-    const price = priceAt(tiered, dec(99))!;
+    const price = priceAt(tiered, 99)!;
     expect(price.toString()).toBe('0.01');
     expect(price.times(99).toFixed(2)).toBe('0.99');
     // The buy-up rule then orders 100 at 0.50, which is cheaper than 99 at 0.99.
@@ -81,9 +76,16 @@ describe('MOQ and order multiple (common practice)', () => {
     const terms = prepareOrderTerms(breaks([1, '0.02'], [1, '0.015']), 1, 1);
     expect(order(terms, 10).unitPrice).toBe('0.015');
   });
-  it('refuses a quote without breaks or with a fractional multiple', () => {
+  it('refuses a quote without breaks, with a fractional multiple or a price that is not a decimal', () => {
     expect(() => prepareOrderTerms([], 1, 1)).toThrow(CostingInputError);
     expect(() => prepareOrderTerms(breaks([1, '0.01']), 1, 2.5)).toThrow(CostingInputError);
+    expect(() => prepareOrderTerms(breaks([1, '1e-3']), 1, 1)).toThrow(CostingInputError);
+    expect(() => prepareOrderTerms(breaks([1, '-0.01']), 1, 1)).toThrow(CostingInputError);
+  });
+  it('refuses a count beyond exact integer range', () => {
+    expect(() => toCount(dec('9007199254740993'), 'requiredQty')).toThrow(CostingInputError);
+    expect(() => toCount(dec('12.5'), 'requiredQty')).toThrow(CostingInputError);
+    expect(toCount(dec('4080'), 'requiredQty')).toBe(4080);
   });
 });
 
@@ -126,12 +128,12 @@ const quoteArb = fc
 
 function bruteForceMin(terms: OrderTerms, need: number): Dec {
   // Every feasible Q (≥ max(R, m'), a multiple of k) up to one multiple past the top break.
-  const k = terms.multiple.toNumber();
-  const start = Math.ceil(Math.max(need, terms.effectiveMoq.toNumber()) / k) * k;
-  const top = terms.tiers[terms.tiers.length - 1].minQty.toNumber() + k;
+  const k = terms.multiple;
+  const start = Math.ceil(Math.max(need, terms.effectiveMoq) / k) * k;
+  const top = terms.tiers[terms.tiers.length - 1].minQty + k;
   let best: Dec | undefined;
   for (let q = start; q <= Math.max(start, top); q += k) {
-    const spend = priceAt(terms, dec(q))!.times(q);
+    const spend = priceAt(terms, q)!.times(q);
     if (!best || spend.lt(best)) best = spend;
   }
   return best!;
@@ -141,11 +143,12 @@ describe('order quantity properties (fast-check)', () => {
   it('orders at least R and the MOQ, in whole multiples', () => {
     fc.assert(
       fc.property(quoteArb, fc.integer({ min: 1, max: 50_000 }), ({ terms, moq, multiple }, need) => {
-        const o = chooseOrder(terms, dec(need));
-        expect(o.orderQty.gte(need)).toBe(true);
-        expect(o.orderQty.gte(moq)).toBe(true);
-        expect(o.orderQty.mod(multiple).isZero()).toBe(true);
-        expect(o.excessQty.eq(o.orderQty.minus(need))).toBe(true);
+        const o = chooseOrder(terms, need);
+        expect(o.orderQty).toBeGreaterThanOrEqual(need);
+        expect(o.orderQty).toBeGreaterThanOrEqual(moq);
+        expect(o.orderQty % multiple).toBe(0);
+        expect(o.excessQty).toBe(o.orderQty - need);
+        expect(o.goodsValue.eq(o.unitPrice.times(o.orderQty))).toBe(true);
       }),
     );
   });
@@ -153,8 +156,8 @@ describe('order quantity properties (fast-check)', () => {
   it('never lets total spend fall when the requirement grows', () => {
     fc.assert(
       fc.property(quoteArb, fc.integer({ min: 1, max: 30_000 }), fc.integer({ min: 1, max: 5_000 }), ({ terms }, need, more) => {
-        const a = chooseOrder(terms, dec(need)).goodsValue;
-        const b = chooseOrder(terms, dec(need + more)).goodsValue;
+        const a = chooseOrder(terms, need).goodsValue;
+        const b = chooseOrder(terms, need + more).goodsValue;
         expect(b.gte(a)).toBe(true);
       }),
     );
@@ -163,7 +166,7 @@ describe('order quantity properties (fast-check)', () => {
   it('finds the lowest spend of every feasible quantity (brute force over all of them)', () => {
     fc.assert(
       fc.property(quoteArb, fc.integer({ min: 1, max: 20_000 }), ({ terms }, need) => {
-        expect(chooseOrder(terms, dec(need)).goodsValue.eq(bruteForceMin(terms, need))).toBe(true);
+        expect(chooseOrder(terms, need).goodsValue.eq(bruteForceMin(terms, need))).toBe(true);
       }),
       { numRuns: 60 },
     );

@@ -126,7 +126,7 @@ export class LandedFactors {
 /** Prices a prepared quote for requirement R in the reporting currency. */
 export function priceQuote(
   pq: PreparedQuote,
-  required: Dec,
+  required: number,
   fx: FxFound,
   duty: DutyMatch,
   factors: LandedFactors,
@@ -135,10 +135,9 @@ export function priceQuote(
   return { pq, order, fx, boardLanded: order.goodsValue.times(factors.multiplier(pq.incoterm, duty, fx)) };
 }
 
-function positiveQty(qty: number, field: string): Dec {
-  const d = dec(qty, field);
-  if (!d.isInteger() || d.lt(1)) throw new CostingInputError(`must be a whole number ≥ 1 (${qty})`, field);
-  return d;
+function positiveQty(qty: number, field: string): number {
+  if (!Number.isSafeInteger(qty) || qty < 1) throw new CostingInputError(`must be a whole number ≥ 1 (${qty})`, field);
+  return qty;
 }
 
 /**
@@ -171,8 +170,8 @@ export function quoteBoard(input: QuoteBoardInput, fxIndex?: FxIndex): QuoteBoar
         supplierId: quote.supplierId,
         incoterm: pq.incoterm,
         leadTimeDays: quote.leadTimeDays ?? null,
-        orderQty: order.orderQty.toNumber(),
-        excessQty: order.excessQty.toNumber(),
+        orderQty: order.orderQty,
+        excessQty: order.excessQty,
         unitPrice: perUnitText(order.unitPrice),
         unitPriceCurrency: quote.currency,
       };
@@ -229,7 +228,7 @@ export function quoteBoard(input: QuoteBoardInput, fxIndex?: FxIndex): QuoteBoar
 
   return {
     partId: input.partId,
-    qty: required.toNumber(),
+    qty: required,
     date: input.date,
     currency,
     dutyPct: duty.ratePct.toString(),

@@ -7,6 +7,7 @@ import { hashPassword, verifyPassword } from '../auth/passwords';
 import { newSecret, hashSecret } from '../auth/secret-tokens';
 import { inviteMail } from '../mail/templates';
 import { audit } from '../audit/repository';
+import { assertAllowed } from '../billing/plan';
 import type { Role } from '../../src/shared/schemas/common';
 import type { AcceptInviteBody, InviteBody } from '../../src/shared/schemas/auth';
 
@@ -17,6 +18,7 @@ export const memberView = (m: { userId: string; email: string; name: string; rol
 });
 
 export async function invite(deps: Deps, auth: Auth, body: InviteBody) {
+  await assertAllowed(deps.db, auth.workspaceId, deps.config.BILLING_GRACE_DAYS, 'members');
   const existing = await usersRepo.byEmail(deps.db, body.email);
   if (existing && (await usersRepo.membership(deps.db, existing.id, auth.workspaceId))) {
     throw errors.conflict('This person is already a member of the workspace.', [{ path: 'email', message: 'is already a member' }]);

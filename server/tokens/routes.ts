@@ -6,6 +6,7 @@ import { tokenBody, tokenOut } from '../../src/shared/schemas/auth';
 import { newSecret } from '../auth/secret-tokens';
 import { scoped } from '../db/scope';
 import { audit } from '../audit/repository';
+import { assertAllowed } from '../billing/plan';
 
 const view = (t: { id: string; name: string; createdAt: Date; lastUsedAt: Date | null }) => ({
   id: t.id, name: t.name, createdAt: new Date(t.createdAt).toISOString(), lastUsedAt: t.lastUsedAt ? new Date(t.lastUsedAt).toISOString() : null,
@@ -30,6 +31,7 @@ export const tokenRoutes: RouteDef[] = [
     body: tokenBody, response: tokenOut.extend({ token: z.string() }),
     handler: async ({ auth, body, deps }) => {
       if (auth.via === 'token') throw errors.forbidden('Create API tokens from a signed-in browser session.');
+      await assertAllowed(deps.db, auth.workspaceId, deps.config.BILLING_GRACE_DAYS, 'apiTokens');
       const { secret, hash } = newSecret('fth_');
       const [row] = await deps.db('api_tokens')
         .insert({ workspaceId: auth.workspaceId, userId: auth.userId, name: body.name, tokenHash: hash })

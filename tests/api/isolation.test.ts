@@ -39,6 +39,10 @@ beforeAll(async () => {
   const line = await a.agent.post(`/api/boms/${bom.body.id}/lines`).send({ partId: part.id, qtyPerUnit: '1' }).expect(201);
   for (const path of ['/api/boms/:id', '/api/boms/:id/state', '/api/boms/:id/revisions', '/api/boms/:id/lines', '/api/boms/:id/lines/bulk', '/api/boms/:id/cost', '/api/boms/:id/cost/curve', '/api/boms/:id/shelf-ladder', '/api/boms/:id/import', '/api/boms/:id/snapshots']) ids[path] = bom.body.id;
   ids['/api/boms/:id/lines/:lineId'] = `${bom.body.id}/lines/${line.body.id}`;
+  for (const path of ['/api/boms/:id/stress']) ids[path] = bom.body.id;
+  for (const path of ['/api/boms/:id/lines/:lineId/waivers', '/api/boms/:id/lines/:lineId/alternatives', '/api/boms/:id/lines/:lineId/swap']) ids[path] = `${bom.body.id}/lines/${line.body.id}`;
+  const policies = await a.agent.get('/api/stress-policies').expect(200);
+  for (const path of ['/api/stress-policies/:id', '/api/stress-policies/:id/default']) ids[path] = policies.body.items[0].id;
   const snap = await a.agent.post(`/api/boms/${bom.body.id}/snapshots`).send({ name: 'first' }).expect(201);
   snapshotId = snap.body.id;
 });
@@ -57,6 +61,9 @@ const bodies: Record<string, object> = {
   'PATCH /api/boms/:id/lines/:lineId': { qtyPerUnit: '2', version: 1 },
   'POST /api/boms/:id/lines/bulk': { create: [{ qtyPerUnit: '1', kind: 'labour', unitCost: '0.01' }] },
   'POST /api/boms/:id/snapshots': { name: 'theirs' },
+  'PATCH /api/stress-policies/:id': { notes: 'changed', version: 1 },
+  'POST /api/boms/:id/lines/:lineId/waivers': { reason: 'Reaching into another workspace.' },
+  'POST /api/boms/:id/lines/:lineId/swap': { partId: '1', version: 1 },
 };
 const queries: Record<string, object> = { 'GET /api/parts/:id/offers': { qty: 100 } };
 afterAll(async () => t.close());
@@ -68,7 +75,7 @@ describe('another workspace is unreachable', () => {
     for (const r of idRoutes()) {
       const id = ids[r.path];
       expect(id, `no record of the first workspace for ${r.path}: add one to this test`).toBeDefined();
-      const path = r.path.includes(':lineId') ? r.path.replace(/:id\/lines\/:lineId/, id) : r.path.replace(/:[A-Za-z]+/, id);
+      const path = r.path.includes(':lineId') ? r.path.replace(':id/lines/:lineId', id) : r.path.replace(/:[A-Za-z]+/, id);
       const key = `${r.method.toUpperCase()} ${r.path}`;
       const req = b.agent[r.method](path).query(queries[key] ?? {});
       const res = r.bodyKind === 'multipart' ? await req.attach('file', tinyPdf, 'sheet.pdf') : await req.send(bodies[key]);

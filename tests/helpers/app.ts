@@ -36,10 +36,10 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     PUBLIC_URL: 'http://127.0.0.1:4100',
     SERVE_CLIENT: 'false',
     RATE_LIMIT_AUTH_PER_MINUTE: '1000',
-    LOG_LEVEL: 'silent',
+    LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent',
     ...env,
   });
-  const farthing = createApp({ db: database.db, config, logger: pino({ level: 'silent' }) });
+  const farthing = createApp({ db: database.db, config, logger: pino({ level: process.env.TEST_LOG_LEVEL ?? 'silent' }) });
   return {
     farthing,
     config,
@@ -60,8 +60,12 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
 export type Agent = ReturnType<TestApp['agent']>;
 
 let counter = 0;
-/** Signs up a new user with a workspace of their own; returns the signed-in agent. */
-export async function signUp(t: TestApp, over: Partial<{ email: string; name: string; password: string; workspaceName: string }> = {}) {
+/**
+ * Signs up a new user with a workspace of their own; returns the signed-in agent. The
+ * workspace is put on the Factory plan unless `plan` says otherwise, so that tests of other
+ * areas are not about plan limits (the billing tests choose Bench on purpose).
+ */
+export async function signUp(t: TestApp, over: Partial<{ email: string; name: string; password: string; workspaceName: string; plan: 'bench' | 'workshop' | 'factory' }> = {}) {
   counter++;
   const body = {
     email: over.email ?? `user${counter}-${Date.now()}@tinbell.example`,
@@ -71,6 +75,8 @@ export async function signUp(t: TestApp, over: Partial<{ email: string; name: st
   };
   const agent = t.agent();
   const res = await agent.post('/api/auth/signup').send(body).expect(201);
+  const plan = over.plan ?? 'factory';
+  if (plan !== 'bench') await t.database.db('workspaces').where({ id: res.body.workspace.id }).update({ plan, billingStatus: 'active' });
   return { agent, body, user: res.body.user as { id: string }, workspace: res.body.workspace as { id: string } };
 }
 

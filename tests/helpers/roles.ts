@@ -1,4 +1,5 @@
 import { hashPassword } from '../../server/auth/passwords';
+import { seedStressPolicies } from '../../server/stress/seed-policies';
 import { roles, type Role } from '../../src/shared/schemas/common';
 import type { Agent, TestApp } from './app';
 
@@ -14,7 +15,9 @@ export async function workspaceWithEveryRole(t: TestApp, name = 'Role Co'): Prom
   const db = t.database.db;
   const password = 'role password 123';
   const passwordHash = await hashPassword(password);
-  const [ws] = await db('workspaces').insert({ name }).returning('id');
+  const [ws] = await db('workspaces').insert({ name, plan: 'factory', billingStatus: 'active' }).returning('id');
+  // What sign-up gives every workspace.
+  await seedStressPolicies(db, ws.id);
   const agents = {} as Record<Role, Agent>;
   const userIds = {} as Record<Role, string>;
   n++;

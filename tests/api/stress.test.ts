@@ -1,0 +1,134 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startTestApp, type TestApp } from '../helpers/app';
+import { workspaceWithEveryRole, type RoleWorkspace } from '../helpers/roles';
+import { makePart, makeSupplier, makeQuote, makeProfile } from '../helpers/factories';
+
+let t: TestApp;
+let ws: RoleWorkspace;
+let bomId: string;
+let cheapChip: { id: string };
+let hvChip: { id: string };
+let capLine: { id: string; version: number };
+let chipLine: { id: string; version: number };
+
+beforeAll(async () => {
+  t = await startTestApp();
+  ws = await workspaceWithEveryRole(t, 'Stress Co');
+  const o = ws.agents.owner;
+  const s = await makeSupplier(o, { currency: 'USD', country: 'US', defaultIncoterm: 'DDP' });
+  const profile = await makeProfile(o, { currency: 'USD' });
+  // 1206 chip, 0.25 W, LEV 200 V, 22 MΩ [CHIP-TF; C] and an HV chip with LEV 800 V (demo values).
+  cheapChip = await makePart(o, { internalPn: 'R-22M-1206', ratings: { resistanceOhm: '22M', powerW: '1/4W', levV: '200V' } });
+  hvChip = await makePart(o, { internalPn: 'R-22M-HV', ratings: { resistanceOhm: '22M', powerW: '1/4W', levV: '800V' } });
+  const disc = await makePart(o, { internalPn: 'C-1N-2KV', category: 'capacitor', ratings: { capacitanceF: '1n', ratedVoltageV: '2kV', dielectric: 'hv_ceramic' } });
+  await makeQuote(o, cheapChip.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0020' }] });
+  await makeQuote(o, hvChip.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0090' }] });
+  await makeQuote(o, disc.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0140' }] });
+  const d = ws.agents.designer;
+  bomId = (await d.post('/api/boms').send({ name: 'Ioniser', reportingCurrency: 'USD', profileId: profile.id, plannedQty: 1000, ambientC: '40' }).expect(201)).body.id;
+  // 1.5 kV across the 2 kV disc: 75 % > 70 % Shelf-grade hv_ceramic limit → beyond policy.
+  capLine = (await d.post(`/api/boms/${bomId}/lines`).send({ refDes: 'C1', partId: disc.id, qtyPerUnit: '1', operatingPoint: { voltageV: '1.5kV' } }).expect(201)).body;
+  // 160 V across a 200 V LEV chip: 80 % = the Shelf-grade resistor voltage limit → passes (close).
+  chipLine = (await d.post(`/api/boms/${bomId}/lines`).send({ refDes: 'R1', partId: cheapChip.id, qtyPerUnit: '1', operatingPoint: { voltageV: '160V' } }).expect(201)).body;
+});
+afterAll(async () => t.close());
+
+describe('the stress check', () => {
+  it('answers in the contract shape with statuses, a tally and the caution', async () => {
+    const res = await ws.agents.viewer.get(`/api/boms/${bomId}/stress`).expect(200);
+    expect(res.body).toHaveProperty('policyId');
+    expect(res.body.summary).toEqual({ clear: 0, close: 1, beyondPolicy: 1, overRating: 0, needsData: 0 });
+    expect(res.body.caution).toMatch(/High voltage can injure/);
+    const cap = res.body.lines.find((l: { lineId: string }) => l.lineId === capLine.id);
+    expect(cap.status).toBe('beyond_policy');
+    expect(cap.checks[0]).toMatchObject({ check: 'capacitor.voltage', applied: 1500, rated: 2000, ratio: 0.75, limit: 0.7, status: 'beyond_policy' });
+    const list = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bomId);
+    expect(list.stress).toEqual({ clear: 0, close: 1, beyondPolicy: 1, overRating: 0, needsData: 0 });
+  });
+
+  it('blocks release over the absolute rating; beyond policy needs a written waiver, kept in the audit log', async () => {
+    const d = ws.agents.designer;
+    const chip = (await d.get(`/api/boms/${bomId}/lines`)).body.items.find((l: { id: string }) => l.id === chipLine.id);
+    // 250 V on the 200 V chip: over its rating.
+    const hot = await d.patch(`/api/boms/${bomId}/lines/${chip.id}`).send({ operatingPoint: { voltageV: '250V' }, version: chip.version }).expect(200);
+    await d.post(`/api/boms/${bomId}/state`).send({ state: 'in_review' }).expect(200);
+    const blocked = await ws.agents.owner.post(`/api/boms/${bomId}/state`).send({ state: 'released' }).expect(409);
+    expect(blocked.body.error.message).toMatch(/absolute rating/);
+    await d.post(`/api/boms/${bomId}/lines/${chip.id}/waivers`).send({ reason: 'We accept this risk for the demo.' }).expect(409);
+
+    await d.post(`/api/boms/${bomId}/state`).send({ state: 'draft' }).expect(200);
+    await d.patch(`/api/boms/${bomId}/lines/${chip.id}`).send({ operatingPoint: { voltageV: '150V' }, version: hot.body.version }).expect(200);
+    await d.post(`/api/boms/${bomId}/state`).send({ state: 'in_review' }).expect(200);
+    const needsWaiver = await ws.agents.owner.post(`/api/boms/${bomId}/state`).send({ state: 'released' }).expect(409);
+    expect(needsWaiver.body.error.message).toMatch(/waiver/);
+    await d.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'short' }).expect(400);
+    await ws.agents.buyer.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'Buyers may not waive stress.' }).expect(403);
+    await d.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'Disc run at 75 % in a potted module; approved after the humidity test.' }).expect(201);
+    const released = await ws.agents.owner.post(`/api/boms/${bomId}/state`).send({ state: 'released' }).expect(200);
+    expect(released.body.state).toBe('released');
+    const log = await ws.agents.owner.get('/api/audit').expect(200);
+    expect(log.body.items.find((e: { action: string }) => e.action === 'waive')).toMatchObject({ entity: 'line', entityId: capLine.id });
+  });
+
+  it('the cheapest part that passes, and the swap that makes the next revision of a released BOM', async () => {
+    const d = ws.agents.designer;
+    const lines = (await d.get(`/api/boms/${bomId}/lines`)).body.items;
+    const chip = lines.find((l: { refDes: string }) => l.refDes === 'R1');
+    // Drive the chip beyond policy in a new revision: 190 V is 95 % of its 200 V LEV.
+    const rev = (await d.post(`/api/boms/${bomId}/revisions`).expect(201)).body;
+    const revChip = (await d.get(`/api/boms/${rev.id}/lines`)).body.items.find((l: { refDes: string }) => l.refDes === 'R1');
+    const hot = await d.patch(`/api/boms/${rev.id}/lines/${revChip.id}`).send({ operatingPoint: { voltageV: '190V' }, version: revChip.version }).expect(200);
+    const alt = await d.get(`/api/boms/${rev.id}/lines/${revChip.id}/alternatives`).expect(200);
+    expect(alt.body.currentStatus).toBe('beyond_policy');
+    expect(alt.body.candidates[0]).toMatchObject({ id: hvChip.id, status: 'clear' });
+    // The HV chip costs 0.0070 more per piece, one per unit.
+    expect(Number(alt.body.candidates[0].costDifference)).toBeCloseTo(0.007, 9);
+    const swapped = await d.post(`/api/boms/${rev.id}/lines/${revChip.id}/swap`).send({ partId: hvChip.id, version: hot.body.version }).expect(200);
+    expect(swapped.body.newRevision).toBe(false);
+    const after = await d.get(`/api/boms/${rev.id}/stress`).expect(200);
+    expect(after.body.lines.find((l: { refDes: string }) => l.refDes === 'R1').status).toBe('clear');
+
+    // On the released revision the swap makes the next revision instead.
+    const onReleased = await d.post(`/api/boms/${bomId}/lines/${chip.id}/swap`).send({ partId: hvChip.id, version: chip.version }).expect(200);
+    expect(onReleased.body.newRevision).toBe(true);
+    expect(onReleased.body.revision).toBe(3);
+  });
+});
+
+describe('stress policies', () => {
+  it('three seeded policies with sources; designers copy and edit; bad limits are refused', async () => {
+    const list = await ws.agents.viewer.get('/api/stress-policies').expect(200);
+    expect(list.body.items.map((p: { name: string }) => p.name)).toEqual(['Shelf-grade', 'Careful', 'Hi-rel']);
+    const shelf = list.body.items[0];
+    expect(shelf.isDefault).toBe(true);
+    expect(shelf.limits.capacitor.hv_ceramic).toMatchObject({ value: 0.7 });
+    expect(shelf.limits.capacitor.hv_ceramic.source).toBeTruthy();
+    const copy = await ws.agents.designer.post('/api/stress-policies').send({ name: 'Shelf-grade, humid', limits: { ...shelf.limits, capacitor: { ...shelf.limits.capacitor, hv_ceramic: { value: 0.6, source: 'our humidity tests' } } } }).expect(201);
+    await ws.agents.designer.patch(`/api/stress-policies/${copy.body.id}`).send({ version: copy.body.version, limits: { ...shelf.limits, led: { current: { value: 1.4 } } } }).expect(400);
+    await ws.agents.buyer.post('/api/stress-policies').send({ name: 'x', limits: shelf.limits }).expect(403);
+  });
+});
+
+describe('circuit helpers over HTTP', () => {
+  it('multiplier: n = 3, Vpk = 2 kV, 1 mA, 50 kHz, 1 nF → 12 kV no-load, 120 V ripple, 440 V drop [CW; C]', async () => {
+    const res = await ws.agents.viewer.post('/api/tools/multiplier').send({ stages: 3, vPeakV: 2000, loadCurrentA: 0.001, frequencyHz: 50000, capacitanceF: 1e-9 }).expect(200);
+    expect(res.body.noLoadV).toBeCloseTo(12000, 6);
+    expect(res.body.ripplePeakToPeakV).toBeCloseTo(120, 6);
+    expect(res.body.dropV).toBeCloseTo(440, 6);
+    expect(res.body.loadedV).toBeCloseTo(11560, 6);
+    expect(res.body.formula).toBeTruthy();
+    expect(res.body.caution).toMatch(/High voltage/);
+  });
+  it('bad input is a 400 naming the field', async () => {
+    const zero = await ws.agents.viewer.post('/api/tools/discharge').send({ capacitanceF: 0, resistanceOhm: 1e7, v0V: 2000, safeV: 60 }).expect(400);
+    expect(zero.body.error.details[0].path).toBe('capacitanceF');
+    const above = await ws.agents.viewer.post('/api/tools/discharge').send({ capacitanceF: 1e-6, resistanceOhm: 1e7, v0V: 50, safeV: 60 }).expect(400);
+    expect(JSON.stringify(above.body.error.details)).toMatch(/safeV/);
+    await ws.agents.viewer.post('/api/tools/accessible-part').send({ capacitanceF: -1, voltageV: 1000 }).expect(400);
+  });
+  it('resistor string: 2 kV over 22 MΩ 1206 chips (LEV 200 V, ±5 %) needs 14 at 80 % [P]', async () => {
+    const res = await ws.agents.viewer.post('/api/tools/resistor-string').send({ totalV: 2000, resistanceOhm: 22e6, powerW: 0.25, levV: 200, tolerancePct: 5, limit: 0.8 }).expect(200);
+    expect(res.body.count).toBe(14);
+    expect(res.body.worstEachV).toBeCloseTo(156.7, 1);
+  });
+});

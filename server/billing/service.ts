@@ -93,8 +93,8 @@ export async function applyEvent(deps: Deps, stripe: Stripe, event: Stripe.Event
   const inserted = await deps.db('billing_events').insert({ id: event.id, type: event.type }).onConflict('id').ignore().returning('id');
   if (!inserted.length) return 'duplicate';
   const obj = event.data.object as unknown as Record<string, unknown>;
-  let subscriptionId: string | null = null;
-  let customerId: string | null = (typeof obj.customer === 'string' ? obj.customer : null) ?? null;
+  let subscriptionId: string | null;
+  const customerId: string | null = typeof obj.customer === 'string' ? obj.customer : null;
   switch (event.type) {
     case 'checkout.session.completed':
       subscriptionId = typeof obj.subscription === 'string' ? obj.subscription : null;

@@ -9,6 +9,8 @@ import type { Knex } from 'knex';
 import type { Config } from './config';
 import type { Deps } from './deps';
 import { createMailer, type Mailer } from './mail/mailer';
+import { createOutbox } from './mail/outbox';
+import { createJobQueue, type JobQueue } from './jobs/queue';
 import { createSessionMiddleware, configurePassport } from './auth/session';
 import { csrfGuard } from './auth/csrf';
 import { resolveAuth } from './auth/resolve-auth';
@@ -34,6 +36,9 @@ export interface AppOptions {
 export interface FarthingApp {
   app: express.Express;
   deps: Deps;
+  /** Resolves once the job queue and the mail worker run. */
+  ready: Promise<void>;
+  queue: JobQueue;
   close(): Promise<void>;
 }
 
@@ -46,7 +51,9 @@ export function createApp(opts: AppOptions): FarthingApp {
       level: config.LOG_LEVEL,
       redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]', '*.password', '*.token'], censor: '[hidden]' },
     });
-  const mailer = opts.mailer ?? createMailer(config);
+  const queue = createJobQueue(config.DATABASE_URL, logger);
+  const outbox = createOutbox(queue, opts.mailer ?? createMailer(config), logger, { work: config.MAIL_WORKER, pollingIntervalSeconds: config.JOB_POLL_SECONDS });
+  const mailer = outbox;
   const store =
     opts.store ??
     createObjectStore({ endpoint: config.S3_ENDPOINT, region: config.S3_REGION, bucket: config.S3_BUCKET, accessKeyId: config.S3_ACCESS_KEY_ID, secretAccessKey: config.S3_SECRET_ACCESS_KEY });
@@ -102,7 +109,10 @@ export function createApp(opts: AppOptions): FarthingApp {
   return {
     app,
     deps,
+    ready: outbox.started,
+    queue,
     close: async () => {
+      await queue.stop();
       await sessions.close();
       mailer.close();
     },

@@ -30,6 +30,9 @@ const schema = z.object({
   /** Points the official SDK at our local fake; unset with real keys. */
   STRIPE_API_URL: z.string().url().optional(),
   BILLING_GRACE_DAYS: z.coerce.number().int().min(0).max(60).default(7),
+  /** Whether this server also runs the mail worker (every server may; each mail goes once). */
+  MAIL_WORKER: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(1),
   MAX_IMPORT_MB: z.coerce.number().min(1).max(200).default(10),
 });
 

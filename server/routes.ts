@@ -14,6 +14,8 @@ import { bomRoutes } from './boms/routes';
 import { stressRoutes } from './stress/routes';
 import { toolRoutes } from './tools/routes';
 import { billingRoutes } from './billing/routes';
+import { rfqRoutes } from './rfqs/routes';
+import { exportRoutes } from './export/routes';
 
 /**
  * The route table: every API route with its access rule and schemas, in one list.
@@ -35,5 +37,7 @@ export function routeTable(passport: PassportStatic): RouteDef[] {
     ...stressRoutes,
     ...toolRoutes,
     ...billingRoutes,
+    ...rfqRoutes,
+    ...exportRoutes,
   ];
 }

@@ -39,10 +39,13 @@ beforeAll(async () => {
   const line = await a.agent.post(`/api/boms/${bom.body.id}/lines`).send({ partId: part.id, qtyPerUnit: '1' }).expect(201);
   for (const path of ['/api/boms/:id', '/api/boms/:id/state', '/api/boms/:id/revisions', '/api/boms/:id/lines', '/api/boms/:id/lines/bulk', '/api/boms/:id/cost', '/api/boms/:id/cost/curve', '/api/boms/:id/shelf-ladder', '/api/boms/:id/import', '/api/boms/:id/snapshots']) ids[path] = bom.body.id;
   ids['/api/boms/:id/lines/:lineId'] = `${bom.body.id}/lines/${line.body.id}`;
-  for (const path of ['/api/boms/:id/stress']) ids[path] = bom.body.id;
+  for (const path of ['/api/boms/:id/stress', '/api/boms/:id/export.xlsx']) ids[path] = bom.body.id;
   for (const path of ['/api/boms/:id/lines/:lineId/waivers', '/api/boms/:id/lines/:lineId/alternatives', '/api/boms/:id/lines/:lineId/swap']) ids[path] = `${bom.body.id}/lines/${line.body.id}`;
   const policies = await a.agent.get('/api/stress-policies').expect(200);
   for (const path of ['/api/stress-policies/:id', '/api/stress-policies/:id/default']) ids[path] = policies.body.items[0].id;
+  await a.agent.patch(`/api/suppliers/${supplier.id}`).send({ contactEmails: ['first@supplier.example'], version: supplier.version }).expect(200);
+  const rfq = await a.agent.post('/api/rfqs').send({ title: 'First RFQ', partIds: [part.id], supplierIds: [supplier.id], quantities: [1000], replyBy: new Date(Date.now() + 7 * 86400_000).toISOString().slice(0, 10) }).expect(201);
+  for (const path of ['/api/rfqs/:id', '/api/rfqs/:id/reminders', '/api/rfqs/:id/close']) ids[path] = rfq.body.id;
   const snap = await a.agent.post(`/api/boms/${bom.body.id}/snapshots`).send({ name: 'first' }).expect(201);
   snapshotId = snap.body.id;
 });

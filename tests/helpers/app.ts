@@ -36,10 +36,12 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     PUBLIC_URL: 'http://127.0.0.1:4100',
     SERVE_CLIENT: 'false',
     RATE_LIMIT_AUTH_PER_MINUTE: '1000',
+    JOB_POLL_SECONDS: '0.5',
     LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent',
     ...env,
   });
   const farthing = createApp({ db: database.db, config, logger: pino({ level: process.env.TEST_LOG_LEVEL ?? 'silent' }) });
+  await farthing.ready;
   return {
     farthing,
     config,
@@ -80,11 +82,11 @@ export async function signUp(t: TestApp, over: Partial<{ email: string; name: st
   return { agent, body, user: res.body.user as { id: string }, workspace: res.body.workspace as { id: string } };
 }
 
-/** Waits for a mail to a recipient in the sink and returns it. */
-export async function waitForMail(sink: MailSink, to: string, timeoutMs = 5000) {
+/** Waits for a mail to a recipient (whose subject contains `subject`, when given) and returns the newest. */
+export async function waitForMail(sink: MailSink, to: string, timeoutMs = 10_000, subject?: string) {
   const start = Date.now();
   for (;;) {
-    const m = [...sink.inbox].reverse().find((x) => x.to.includes(to.toLowerCase()));
+    const m = [...sink.inbox].reverse().find((x) => x.to.includes(to.toLowerCase()) && (!subject || x.subject.includes(subject)));
     if (m) return m;
     if (Date.now() - start > timeoutMs) throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
     await new Promise((r) => setTimeout(r, 50));

@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node';
 import { prepareDatabase, type PreparedDatabase } from '../../scripts/lib/database';
 import { createDb } from '../../server/db/knex';
 import { migrateLatest } from '../../server/db/migrate';
+import PgBoss from 'pg-boss';
 
 let prepared: PreparedDatabase | null = null;
 
@@ -28,6 +29,10 @@ export default async function setup(_project: TestProject): Promise<() => void> 
   const template = createDb(prepared.url.replace(/\/[^/]*$/, `/${templateName}`));
   await migrateLatest(template);
   await template.destroy();
+  // The job queue's own schema, made once here so every clone starts with it.
+  const boss = new PgBoss({ connectionString: prepared.url.replace(/\/[^/]*$/, `/${templateName}`), schema: 'pgboss', supervise: false, schedule: false });
+  await boss.start();
+  await boss.stop({ graceful: false, wait: true });
   await unregister();
   process.env.FARTHING_TEST_ADMIN_URL = prepared.url;
   process.env.FARTHING_TEST_TEMPLATE = templateName;

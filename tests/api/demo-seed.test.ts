@@ -35,6 +35,29 @@ describe('the demo workspace', () => {
     expect(Number(rated!.n)).toBeGreaterThanOrEqual(40);
   });
 
+  it('the demo BOMs cost out and their stress checks show every status', async () => {
+    const agent = t.agent();
+    await agent.post('/api/auth/login').send({ email: 'designer@tinbell.example', password: demoPassword }).expect(200);
+    const boms = (await agent.get('/api/boms').expect(200)).body.items as { id: string; name: string; revision: number; state: string; cost: { landedPerUnit: string; leftOut: number } }[];
+    expect(boms.map((b) => `${b.name} r${b.revision} ${b.state}`).sort()).toEqual([
+      'Arc lighter (USB rechargeable) r1 released', 'Arc lighter (USB rechargeable) r2 draft', 'Clip-on LED book light r1 in_review', 'Desk ioniser r1 draft',
+    ]);
+    for (const b of boms) {
+      expect(Number(b.cost.landedPerUnit), b.name).toBeGreaterThan(0);
+      expect(b.cost.leftOut, b.name).toBe(0);
+    }
+    const statuses = new Set<string>();
+    for (const b of boms) for (const l of (await agent.get(`/api/boms/${b.id}/stress`).expect(200)).body.lines) statuses.add(l.status);
+    expect([...statuses].sort()).toEqual(['beyond_policy', 'clear', 'close', 'needs_data', 'over_rating']);
+    // The cost-down revision's chip bleeder is beyond policy, and a cheaper-than-leaded HV chip fixes it.
+    const rev2 = boms.find((b) => b.revision === 2)!;
+    const stress = (await agent.get(`/api/boms/${rev2.id}/stress`).expect(200)).body;
+    const bleeder = stress.lines.find((l: { refDes: string }) => l.refDes === 'R10-R13');
+    expect(bleeder.status).toBe('beyond_policy');
+    const alt = (await agent.get(`/api/boms/${rev2.id}/lines/${bleeder.lineId}/alternatives`).expect(200)).body;
+    expect(alt.candidates[0].internalPn).toBe('TB-R-22M-HV1206');
+  });
+
   it('seeding again changes nothing', async () => {
     const before = [await count('users'), await count('parts'), await count('quotes'), await count('fx_rates')];
     await withTsx(() => t.database.db.seed.run(seedConfig));

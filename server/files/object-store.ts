@@ -1,3 +1,6 @@
+// A known notice of the SDK about Node 22 in 2027; the version is pinned in the lock file.
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+
 import { S3Client, PutObjectCommand, GetObjectCommand, DeleteObjectCommand, CreateBucketCommand, HeadBucketCommand } from '@aws-sdk/client-s3';
 import type { Readable } from 'node:stream';
 

@@ -8,8 +8,9 @@ import { readUpload } from './upload';
 
 type Middleware = (req: Request, res: Response, next: NextFunction) => void;
 
+// An empty object is what the JSON parser leaves when nothing was sent; anything else is a body.
 const hasBody = (body: unknown) =>
-  body !== undefined && body !== null && !(typeof body === 'object' && Object.keys(body as object).length === 0);
+  body !== undefined && !(body !== null && typeof body === 'object' && !Array.isArray(body) && Object.keys(body).length === 0);
 
 /**
  * Mounts the route table: for each route, access first (401, then 403), then input

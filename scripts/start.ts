@@ -70,6 +70,17 @@ async function main() {
       SERVE_CLIENT: dev ? 'false' : 'true',
       LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
     };
+    // The payment-service fake, unless a key of your own is configured.
+    if (!process.env.STRIPE_SECRET_KEY && !process.env.STRIPE_API_URL) {
+      const stripePort = Number(process.env.STRIPE_FAKE_PORT ?? 4103);
+      children.push(
+        spawn(process.execPath, ['--import', 'tsx', 'stripe-fake/main.ts'], {
+          stdio: 'inherit',
+          env: { ...env, STRIPE_FAKE_PORT: String(stripePort), STRIPE_WEBHOOK_URL: `http://127.0.0.1:${port}/api/billing/webhook` },
+        }),
+      );
+      Object.assign(env, { STRIPE_API_URL: `http://127.0.0.1:${stripePort}` });
+    }
     if (dev) {
       children.push(spawn(process.execPath, ['--import', 'tsx', '--watch', 'server/index.ts'], { stdio: 'inherit', env }));
       children.push(spawn('node_modules/.bin/vite', ['--host', '127.0.0.1', '--port', '5173', '--strictPort'], { stdio: 'inherit', env: { ...env, FARTHING_API_PORT: String(port) } }));

@@ -1,0 +1,110 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import { createTestDatabase, type TestDatabase } from '../helpers/db';
+import { startMailSink, type MailSink } from '../../server/mail/sink';
+import { startS3Fake, type S3Fake } from '../../server/files/s3-fake';
+import { freePort } from '../helpers/ports';
+import { tinyPdf } from '../helpers/factories';
+
+/**
+ * Two app server processes on two loopback ports, one database, one object store, one mail
+ * sink: nothing lives in a server, so any server answers any request.
+ */
+let database: TestDatabase;
+let sink: MailSink;
+let s3: S3Fake;
+let s3Dir: string;
+const servers: { proc: ChildProcess; url: string }[] = [];
+
+async function startServer(env: Record<string, string>): Promise<{ proc: ChildProcess; url: string }> {
+  const port = await freePort();
+  const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    env: { ...process.env, ...env, PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'warn', SERVE_CLIENT: 'false' },
+    stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+  });
+  await new Promise<void>((resolve, reject) => {
+    proc.once('message', () => resolve());
+    proc.once('exit', (code) => reject(new Error(`server exited ${code}`)));
+  });
+  return { proc, url: `http://127.0.0.1:${port}` };
+}
+
+beforeAll(async () => {
+  database = await createTestDatabase();
+  sink = await startMailSink();
+  s3Dir = mkdtempSync(join(tmpdir(), 'farthing-s3-two-'));
+  s3 = await startS3Fake({ directory: s3Dir, bucket: 'farthing' });
+  const env = {
+    DATABASE_URL: database.url, SESSION_SECRET: 'shared-secret-of-both-servers', SMTP_PORT: String(sink.smtpPort),
+    S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, JOB_POLL_SECONDS: '0.5', PUBLIC_URL: 'http://127.0.0.1:4100',
+  };
+  servers.push(await startServer(env), await startServer(env));
+}, 90_000);
+
+afterAll(async () => {
+  for (const s of servers) {
+    s.proc.kill('SIGTERM');
+    await new Promise((r) => s.proc.once('exit', r));
+  }
+  await sink.close();
+  await s3.close();
+  rmSync(s3Dir, { recursive: true, force: true });
+  await database.drop();
+});
+
+describe('two servers side by side', () => {
+  it('a session from one is valid on the other; an upload through one downloads through the other', async () => {
+    const [a, b] = servers;
+    const signup = await request(a.url).post('/api/auth/signup').set('X-Requested-With', 'farthing')
+      .send({ email: 'two@tinbell.example', password: 'two servers pw', name: 'Two', workspaceName: 'Two Co' }).expect(201);
+    const cookie = signup.headers['set-cookie'][0].split(';')[0];
+    await database.db('workspaces').update({ plan: 'factory', billingStatus: 'active' });
+    const me = await request(b.url).get('/api/auth/me').set('Cookie', cookie).expect(200);
+    expect(me.body.user.email).toBe('two@tinbell.example');
+
+    const part = await request(a.url).post('/api/parts').set('Cookie', cookie).set('X-Requested-With', 'farthing').send({ internalPn: 'TWO-1', category: 'other' }).expect(201);
+    const file = await request(a.url).post(`/api/parts/${part.body.id}/files`).set('Cookie', cookie).set('X-Requested-With', 'farthing').attach('file', tinyPdf, 'sheet.pdf').expect(201);
+    const dl = await request(b.url).get(`/api/files/${file.body.id}`).set('Cookie', cookie).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    }).expect(200);
+    expect(Buffer.compare(dl.body as Buffer, tinyPdf)).toBe(0);
+  });
+
+  it('a queued e-mail is sent exactly once though both servers run the mail worker', async () => {
+    const [a] = servers;
+    const cookie = (await request(a.url).post('/api/auth/login').set('X-Requested-With', 'farthing').send({ email: 'two@tinbell.example', password: 'two servers pw' }).expect(200)).headers['set-cookie'][0].split(';')[0];
+    for (let i = 0; i < 10; i++) {
+      await request(a.url).post('/api/invites').set('Cookie', cookie).set('X-Requested-With', 'farthing').send({ email: `once-${i}@tinbell.example`, role: 'viewer' }).expect(201);
+    }
+    const until = Date.now() + 15_000;
+    while (sink.inbox.filter((m) => m.to[0]?.startsWith('once-')).length < 10 && Date.now() < until) await new Promise((r) => setTimeout(r, 100));
+    await new Promise((r) => setTimeout(r, 2000));
+    const got = sink.inbox.filter((m) => m.to[0]?.startsWith('once-')).map((m) => m.to[0]).sort();
+    expect(got).toEqual(Array.from({ length: 10 }, (_, i) => `once-${i}@tinbell.example`).sort());
+  });
+
+  it('a cost roll refreshed by an edit on one server is read fresh on the other', async () => {
+    const [a, b] = servers;
+    const cookie = (await request(a.url).post('/api/auth/login').set('X-Requested-With', 'farthing').send({ email: 'two@tinbell.example', password: 'two servers pw' }).expect(200)).headers['set-cookie'][0].split(';')[0];
+    const send = (url: string) => ({
+      post: (p: string, body: object) => request(url).post(p).set('Cookie', cookie).set('X-Requested-With', 'farthing').send(body),
+      patch: (p: string, body: object) => request(url).patch(p).set('Cookie', cookie).set('X-Requested-With', 'farthing').send(body),
+      get: (p: string) => request(url).get(p).set('Cookie', cookie),
+    });
+    const supplier = (await send(a.url).post('/api/suppliers', { name: 'Two supplier', country: 'US', currency: 'USD', defaultIncoterm: 'DDP' }).expect(201)).body;
+    const part = (await send(a.url).post('/api/parts', { internalPn: 'TWO-R', category: 'resistor', ratings: {} }).expect(201)).body;
+    const quote = (await send(a.url).post('/api/quotes', { partId: part.id, supplierId: supplier.id, currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0100' }] }).expect(201)).body;
+    const bom = (await send(a.url).post('/api/boms', { name: 'Two BOM', reportingCurrency: 'USD', plannedQty: 1000 }).expect(201)).body;
+    await send(a.url).post(`/api/boms/${bom.id}/lines`, { partId: part.id, qtyPerUnit: '1' }).expect(201);
+    const onB = async () => (await send(b.url).get('/api/boms').expect(200)).body.items.find((x: { id: string }) => x.id === bom.id).cost.landedPerUnit;
+    expect(await onB()).toBe('0.0100000000');
+    await send(a.url).patch(`/api/quotes/${quote.id}`, { version: quote.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0070' }] }).expect(200);
+    expect(await onB()).toBe('0.0070000000');
+  });
+});

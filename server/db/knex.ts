@@ -37,6 +37,14 @@ export function createDb(connectionString: string, overrides: Partial<Knex.Confi
       }
       return camelizeRow(result);
     },
+    // A lost connection is reported to the client as a 503 by the error handler; knex's own
+    // console line about it would only repeat that.
+    log: {
+      warn: (m: string) => (/Connection Error/.test(String(m)) ? undefined : console.warn(m)),
+      error: (m: string) => console.error(m),
+      deprecate: (m: string) => console.warn(m),
+      debug: () => undefined,
+    },
     ...overrides,
   });
 }

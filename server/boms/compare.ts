@@ -11,7 +11,8 @@ type Side = Pick<CostView, 'qty' | 'date' | 'currency' | 'totals' | 'lines'> & {
 
 const totalKeys = ['goods', 'excessValue', 'origin', 'freight', 'insurance', 'duty', 'fees', 'destination', 'assembly', 'costLinesPerUnit', 'oneTimePerUnit', 'landedTotal', 'landedPerUnit'] as const;
 
-const lineKey = (l: CostView['lines'][number]) => (l.refDes ? `ref:${l.refDes}` : l.partId ? `part:${l.partId}` : `line:${l.kind}:${l.lineId}`);
+// Revisions copy lines, so a line is known by its designators, else its part, else its kind.
+const lineKey = (l: CostView['lines'][number]) => (l.refDes ? `ref:${l.refDes}` : l.partId ? `part:${l.partId}` : `kind:${l.kind}:${l.category}`);
 const diff = (a: string | null | undefined, b: string | null | undefined) => (a == null || b == null ? null : new Dec(b).minus(a).toFixed(6));
 
 export async function saveSnapshot(deps: Deps, auth: Auth, bomId: string, name: string, qty?: number, date?: string) {
@@ -50,8 +51,18 @@ export async function compare(deps: Deps, workspaceId: string, left: string, rig
   const [a, b] = await Promise.all([side(deps, workspaceId, left, qty), side(deps, workspaceId, right, qty)]);
   if (a.currency !== b.currency) throw errors.validation(`The two sides are in different currencies (${a.currency} and ${b.currency}).`);
   const totals = totalKeys.map((k) => ({ name: k, left: a.totals[k] ?? null, right: b.totals[k] ?? null, change: diff(a.totals[k], b.totals[k]) }));
-  const left_ = new Map(a.lines.map((l) => [lineKey(l), l]));
-  const right_ = new Map(b.lines.map((l) => [lineKey(l), l]));
+  // Repeated keys (two labour lines) are told apart by their order.
+  const keyed = (lines: CostView['lines']) => {
+    const seen = new Map<string, number>();
+    return new Map(lines.map((l) => {
+      const k = lineKey(l);
+      const n = (seen.get(k) ?? 0) + 1;
+      seen.set(k, n);
+      return [n === 1 ? k : `${k}#${n}`, l] as const;
+    }));
+  };
+  const left_ = keyed(a.lines);
+  const right_ = keyed(b.lines);
   const keys = [...new Set([...left_.keys(), ...right_.keys()])];
   const lines = keys.map((k) => {
     const l = left_.get(k);

@@ -96,7 +96,7 @@ export async function editableBom(db: DbOrTrx, workspaceId: string, id: string, 
   const row = (await q.first()) as BomRow | undefined;
   if (!row) throw errors.notFound('BOM');
   if (row.state === 'released') {
-    throw errors.conflict(`Revision ${row.revision} of ${row.name} is released and read-only; make a new revision to change it.`);
+    throw errors.readOnly(`Revision ${row.revision} of ${row.name} is released and read-only; make a new revision to change it.`);
   }
   return row;
 }

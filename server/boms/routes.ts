@@ -173,7 +173,10 @@ export const bomRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/cost', access: 'boms.read', tag: 'Cost roll',
     summary: 'The cost roll: landed cost per unit at a build quantity (default: planned) and costing date (default: today), per line and in totals, in the reporting currency.',
     params: idParams, query: costQuery,
-    handler: async ({ auth, params, query, deps }) => costOf(deps.db, auth.workspaceId, await getBom(deps.db, auth.workspaceId, params.id), query.qty, query.date),
+    handler: async ({ auth, params, query, deps }) => {
+      const cost = await costOf(deps.db, auth.workspaceId, await getBom(deps.db, auth.workspaceId, params.id), query.qty, query.date);
+      return query.view === 'totals' ? { ...cost, lines: [] } : cost;
+    },
   }),
   route({
     method: 'get', path: '/api/boms/:id/cost/curve', access: 'boms.read', tag: 'Cost roll',

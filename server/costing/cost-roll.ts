@@ -28,6 +28,7 @@ import type {
   IneligibleReason,
   IsoDate,
   LeftOutReason,
+  LineKind,
   LineWarning,
   LineWarningCode,
   Part,
@@ -85,6 +86,8 @@ export interface PreparedCostRoll {
 
 const fxDetail = (from: string, to: string, date: string) => `${from}->${to} ${date}`;
 
+const LINE_KINDS: ReadonlySet<string> = new Set<LineKind>(['part', 'labour', 'packaging', 'test', 'tooling', 'other']);
+
 function optionalDec(value: string | null | undefined, field: string): Dec | null {
   return value === null || value === undefined || value === '' ? null : dec(value, field);
 }
@@ -122,9 +125,10 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
     const f = `lines.${index}`;
     if (seen.has(line.id)) throw new CostingInputError(`duplicate line id ${line.id}`, `${f}.id`);
     seen.add(line.id);
+    if (!LINE_KINDS.has(line.kind)) throw new CostingInputError(`unknown line kind ${String(line.kind)}`, `${f}.kind`);
     const isPart = line.kind === 'part';
     const qtyPerUnit = isPart ? dec(line.qtyPerUnit, `${f}.qtyPerUnit`) : decOr(line.qtyPerUnit, ONE, `${f}.qtyPerUnit`);
-    if (isPart && !qtyPerUnit.isPositive()) throw new CostingInputError('must be positive', `${f}.qtyPerUnit`);
+    if (isPart ? !qtyPerUnit.gt(0) : qtyPerUnit.isNeg()) throw new CostingInputError('must be positive', `${f}.qtyPerUnit`);
     return {
       index,
       line,
@@ -487,9 +491,10 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   let oneTimeTotal = ZERO;
   const byCategory = new Map<string, Sums>();
   const bySupplier = new Map<string, { goods: Dec; excessValue: Dec; landed: Dec; count: number }>();
-  const fxUsed = new Map<string, FxRateUsed>();
+  // Rows come from cached lookups, so the same few objects recur on every line.
+  const fxSeen = new Set<FxRateUsed>();
   const noteFx = (rows: FxRateUsed[]) => {
-    for (const r of rows) fxUsed.set(`${r.date}|${r.base}|${r.quote}`, r);
+    for (const r of rows) fxSeen.add(r);
   };
   if (p.freightPool.ok && freightShares) noteFx(p.freightPool.rows);
   if (p.feesPool.ok && feeShares) noteFx(p.feesPool.rows);
@@ -615,10 +620,16 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     warnings,
     leftOut: { count: leftOutLines.length, lines: leftOutLines },
     dnp: { count: dnpIds.length, lineIds: dnpIds },
-    fxRates: [...fxUsed.values()].sort((a, b) =>
-      a.date !== b.date ? (a.date < b.date ? -1 : 1) : `${a.base}${a.quote}` < `${b.base}${b.quote}` ? -1 : 1,
-    ),
+    fxRates: usedRates(fxSeen),
   };
+}
+
+/** The FX rows behind a roll, each once (per direction), by date then pair. */
+function usedRates(seen: Set<FxRateUsed>): FxRateUsed[] {
+  const key = (r: FxRateUsed) => `${r.date}|${r.base}|${r.quote}|${r.inverted ? 1 : 0}`;
+  const unique = new Map<string, FxRateUsed>();
+  for (const r of seen) if (!unique.has(key(r))) unique.set(key(r), r);
+  return [...unique.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, r]) => r);
 }
 
 function lineOutput(w: Work, N: Dec): CostRollLine {

@@ -60,15 +60,6 @@ export function ceilInt(x: Dec): Dec {
   return x.ceil();
 }
 
-/** Smallest multiple of k that is ≥ x (k a positive integer). */
-export function ceilToMultiple(x: Dec, k: Dec): Dec {
-  return k.eq(1) ? x.ceil() : x.div(k).ceil().times(k);
-}
-
-export function maxDec(a: Dec, b: Dec): Dec {
-  return a.gte(b) ? a : b;
-}
-
 /** Half-up (away from zero) to `dp` decimal places: -2.345 → -2.35. */
 export function roundHalfUp(value: Dec, dp: number): Dec {
   return value.toDecimalPlaces(dp, Decimal.ROUND_HALF_UP);

@@ -130,7 +130,7 @@ function bruteForceMin(terms: OrderTerms, need: number): Dec {
   // Every feasible Q (≥ max(R, m'), a multiple of k) up to one multiple past the top break.
   const k = terms.multiple;
   const start = Math.ceil(Math.max(need, terms.effectiveMoq) / k) * k;
-  const top = terms.tiers[terms.tiers.length - 1].minQty + k;
+  const top = terms.minQtys[terms.minQtys.length - 1] + k;
   let best: Dec | undefined;
   for (let q = start; q <= Math.max(start, top); q += k) {
     const spend = priceAt(terms, q)!.times(q);

@@ -33,29 +33,20 @@ export function ceilToMultipleCount(x: number, k: number): number {
   return r === 0 ? x : x - r + k;
 }
 
-interface Tier {
-  minQty: number;
-  /** The price as quoted; parsed on first use (a large requirement never reads the low tiers). */
-  priceText: string;
-  price?: Dec;
-}
-
-interface BuyUp {
-  /** k × ceil(minQty / k) for one break, with its price and spend. */
-  qty: number;
-  price: Dec;
-  spend: Dec;
-}
-
-/** A quote's buying terms, parsed once so that many requirements can be priced cheaply. */
+/**
+ * A quote's buying terms, parsed once so that many requirements can be priced cheaply.
+ * Breaks are held as parallel arrays (ascending minQty) rather than an object each: a
+ * 10,000-line BOM brings 200,000 of them.
+ */
 export interface OrderTerms {
-  tiers: Tier[];
+  minQtys: number[];
+  /** Prices as quoted; parsed into `prices` on first use (a large requirement never reads the low tiers). */
+  priceTexts: string[];
+  prices: (Dec | undefined)[];
   moq: number;
   multiple: number;
   /** m' = max(MOQ, smallest break's minQty). */
   effectiveMoq: number;
-  /** Buy-up candidate per break, fixed for the quote; filled on first use. */
-  buyUps: (BuyUp | undefined)[];
 }
 
 /** The cheapest order for R without the excess figures: what ranking quotes needs. */
@@ -73,33 +64,26 @@ export interface OrderChoice extends OrderSpend {
   excessValue: Dec;
 }
 
-// Field paths are built only when something is wrong: this runs for every break of every quote.
-function positiveCount(value: number, path: () => string): number {
+/** A whole count ≥ 1 (a number, or a string of digits), else -1. */
+function positiveCount(value: unknown): number {
   const n = typeof value === 'string' && isDecimalText(value) ? Number(value) : value;
-  if (typeof n === 'number' && Number.isSafeInteger(n) && n >= 1) return n;
-  throw new CostingInputError(`must be a whole number ≥ 1 (${String(value)})`, path());
+  return typeof n === 'number' && Number.isSafeInteger(n) && n >= 1 ? n : -1;
 }
 
-function priceOf(t: Tier): Dec {
-  return (t.price ??= new Dec(t.priceText));
+// Field paths are built only when something is wrong: this runs for every break of every quote.
+function notACount(value: unknown, path: string): never {
+  throw new CostingInputError(`must be a whole number ≥ 1 (${String(value)})`, path);
 }
 
-/** The tier price(Q) reads: the break with the greatest minQty ≤ Q (tiers ascending). */
-function tierIndex(tiers: Tier[], qty: number): number {
-  let i = tiers.length - 1;
-  while (i >= 0 && tiers[i].minQty > qty) i--;
+function priceOf(terms: OrderTerms, i: number): Dec {
+  return (terms.prices[i] ??= new Dec(terms.priceTexts[i]));
+}
+
+/** The break price(Q) reads: the greatest minQty ≤ Q (ascending), or -1. */
+function tierIndex(minQtys: number[], qty: number): number {
+  let i = minQtys.length - 1;
+  while (i >= 0 && minQtys[i] > qty) i--;
   return i;
-}
-
-function buyUp(terms: OrderTerms, i: number): BuyUp {
-  let b = terms.buyUps[i];
-  if (!b) {
-    const qty = ceilToMultipleCount(terms.tiers[i].minQty, terms.multiple);
-    // Rounding up to the multiple may carry the quantity into a higher tier.
-    const price = priceOf(terms.tiers[tierIndex(terms.tiers, qty)]);
-    b = terms.buyUps[i] = { qty, price, spend: price.times(qty) };
-  }
-  return b;
 }
 
 /**
@@ -110,39 +94,50 @@ export function prepareOrderTerms(priceBreaks: PriceBreak[], moq: number, orderM
   if (!Array.isArray(priceBreaks) || priceBreaks.length === 0) {
     throw new CostingInputError('a quote needs at least one price break', `${field}.priceBreaks`);
   }
-  let tiers: Tier[] = priceBreaks.map((b, i) => {
-    const minQty = positiveCount(b.minQty, () => `${field}.priceBreaks.${i}.minQty`);
-    const priceText = typeof b.unitPrice === 'string' ? b.unitPrice.trim() : String(b.unitPrice);
-    if (!isDecimalText(priceText) || priceText.startsWith('-')) {
+  const n = priceBreaks.length;
+  let minQtys = new Array<number>(n);
+  let priceTexts = new Array<string>(n);
+  let ascending = true;
+  for (let i = 0; i < n; i++) {
+    const b = priceBreaks[i];
+    const minQty = positiveCount(b.minQty);
+    if (minQty < 0) notACount(b.minQty, `${field}.priceBreaks.${i}.minQty`);
+    let text = b.unitPrice;
+    if (typeof text !== 'string' || !isDecimalText(text)) text = String(text).trim();
+    if (!isDecimalText(text) || text.startsWith('-')) {
       throw new CostingInputError(`not a price (${JSON.stringify(b.unitPrice)})`, `${field}.priceBreaks.${i}.unitPrice`);
     }
-    return { minQty, priceText };
-  });
-  // Quotes usually list breaks in ascending order; sort and de-duplicate only when not.
-  let ascending = true;
-  for (let i = 1; i < tiers.length && ascending; i++) ascending = tiers[i - 1].minQty < tiers[i].minQty;
-  if (!ascending) {
-    const sorted = [...tiers].sort((a, b) => a.minQty - b.minQty || priceOf(a).cmp(priceOf(b)));
-    tiers = [];
-    for (const t of sorted) {
-      if (tiers.length === 0 || tiers[tiers.length - 1].minQty !== t.minQty) tiers.push(t);
-    }
+    minQtys[i] = minQty;
+    priceTexts[i] = text;
+    if (i > 0 && minQtys[i - 1] >= minQty) ascending = false;
   }
-  const moqCount = positiveCount(moq, () => `${field}.moq`);
-  const multiple = positiveCount(orderMultiple, () => `${field}.orderMultiple`);
+  // Quotes usually list breaks in ascending order; sort and de-duplicate only when not.
+  if (!ascending) {
+    const order = minQtys
+      .map((q, i) => ({ q, i, price: new Dec(priceTexts[i]) }))
+      .sort((a, b) => a.q - b.q || a.price.cmp(b.price))
+      .filter((t, k, all) => k === 0 || all[k - 1].q !== t.q);
+    minQtys = order.map((t) => t.q);
+    priceTexts = order.map((t) => priceTexts[t.i]);
+  }
+  const moqCount = positiveCount(moq);
+  if (moqCount < 0) notACount(moq, `${field}.moq`);
+  const multiple = positiveCount(orderMultiple);
+  if (multiple < 0) notACount(orderMultiple, `${field}.orderMultiple`);
   return {
-    tiers,
+    minQtys,
+    priceTexts,
+    prices: new Array<Dec | undefined>(minQtys.length),
     moq: moqCount,
     multiple,
-    effectiveMoq: Math.max(moqCount, tiers[0].minQty),
-    buyUps: new Array<BuyUp | undefined>(tiers.length),
+    effectiveMoq: Math.max(moqCount, minQtys[0]),
   };
 }
 
 /** price(Q) for a prepared quote; undefined below the smallest break. */
 export function priceAt(terms: OrderTerms, qty: number): Dec | undefined {
-  const i = tierIndex(terms.tiers, qty);
-  return i < 0 ? undefined : priceOf(terms.tiers[i]);
+  const i = tierIndex(terms.minQtys, qty);
+  return i < 0 ? undefined : priceOf(terms, i);
 }
 
 /**
@@ -154,20 +149,23 @@ export function priceAt(terms: OrderTerms, qty: number): Dec | undefined {
 export function orderSpend(terms: OrderTerms, required: number): OrderSpend {
   const base = ceilToMultipleCount(Math.max(required, terms.effectiveMoq), terms.multiple);
   if (!Number.isSafeInteger(base)) throw new CostingInputError(`order quantity beyond 2^53 (${base})`, 'requiredQty');
-  const { tiers } = terms;
+  const { minQtys } = terms;
   // base ≥ m' ≥ the smallest break, so it always has a tier.
-  const i = tierIndex(tiers, base);
+  const i = tierIndex(minQtys, base);
   let orderQty = base;
-  let unitPrice = priceOf(tiers[i]);
+  let unitPrice = priceOf(terms, i);
   let goodsValue = unitPrice.times(base);
-  // Every break above Q0's tier has minQty > Q0: those are the buy-up candidates. They are
-  // ascending, so a strict "<" keeps the smaller Q on a tie.
-  for (let j = i + 1; j < tiers.length; j++) {
-    const b = buyUp(terms, j);
-    if (b.spend.lt(goodsValue)) {
-      orderQty = b.qty;
-      unitPrice = b.price;
-      goodsValue = b.spend;
+  // Every break above Q0's tier has minQty > Q0: those are the buy-up candidates, at
+  // k × ceil(minQty / k), which may land in a still higher tier. They are ascending, so a
+  // strict "<" keeps the smaller Q on a tie.
+  for (let j = i + 1; j < minQtys.length; j++) {
+    const qty = ceilToMultipleCount(minQtys[j], terms.multiple);
+    const price = priceOf(terms, tierIndex(minQtys, qty));
+    const spend = price.times(qty);
+    if (spend.lt(goodsValue)) {
+      orderQty = qty;
+      unitPrice = price;
+      goodsValue = spend;
     }
   }
   return { orderQty, unitPrice, goodsValue };

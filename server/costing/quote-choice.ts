@@ -28,17 +28,30 @@ export interface PreparedQuote {
   createdAtMs: number;
 }
 
+// Imports stamp many quotes with the same time; parse each distinct text once.
+const parsedTimes = new Map<string, number>();
+function timeMs(text: string | null | undefined): number {
+  if (!text) return Number.POSITIVE_INFINITY;
+  let ms = parsedTimes.get(text);
+  if (ms === undefined) {
+    const parsed = Date.parse(text);
+    ms = Number.isNaN(parsed) ? Number.POSITIVE_INFINITY : parsed;
+    if (parsedTimes.size > 10_000) parsedTimes.clear();
+    parsedTimes.set(text, ms);
+  }
+  return ms;
+}
+
 export function prepareQuote(quote: Quote, suppliers: ReadonlyMap<string, Supplier>, index?: number): PreparedQuote {
   const field = index === undefined ? `quote ${quote.id}` : `quotes.${index}`;
   const supplier = suppliers.get(quote.supplierId);
   if (!supplier) throw new CostingInputError(`supplier ${quote.supplierId} is not in the input`, `${field}.supplierId`);
-  const created = quote.createdAt ? Date.parse(quote.createdAt) : Number.NaN;
   return {
     quote,
     incoterm: isIncoterm(quote.incoterm) ? quote.incoterm : assertIncoterm(quote.incoterm, `${field}.incoterm`),
     terms: prepareOrderTerms(quote.priceBreaks, quote.moq, quote.orderMultiple, field),
     supplierActive: supplier.active === true,
-    createdAtMs: Number.isNaN(created) ? Number.POSITIVE_INFINITY : created,
+    createdAtMs: timeMs(quote.createdAt),
   };
 }
 
@@ -54,6 +67,9 @@ export function supplierMap(suppliers: Supplier[]): Map<string, Supplier> {
  */
 export function eligibilityReasons(pq: PreparedQuote, date: IsoDate, maxLeadTimeDays: number | null): IneligibleReason[] {
   const q = pq.quote;
+  const leadOk = maxLeadTimeDays === null || (q.leadTimeDays !== null && q.leadTimeDays !== undefined && q.leadTimeDays <= maxLeadTimeDays);
+  // Fast path for the common case: eligible.
+  if (pq.supplierActive && leadOk && !(q.validUntil && q.validUntil < date) && !(q.validFrom && q.validFrom > date)) return [];
   const reasons: IneligibleReason[] = [];
   if (q.validUntil && q.validUntil < date) reasons.push('expired');
   if (q.validFrom && q.validFrom > date) reasons.push('not_yet_valid');

@@ -5,6 +5,7 @@
  */
 import fc from 'fast-check';
 import { INCOTERMS } from './incoterms';
+import { scaledText } from './test-factories';
 import type { BomLine, CostRollInput, FxRate, Incoterm, LandedCostProfile, Mount, Part, PartCategory, Quote, Supplier } from './types';
 
 const CATEGORIES: PartCategory[] = ['resistor', 'capacitor', 'led', 'switch', 'pcb', 'battery'];
@@ -18,8 +19,10 @@ export const FX_ROWS: FxRate[] = [
   { date: '2026-11-30', base: 'EUR', quote: 'USD', rate: '1.0811' },
 ];
 
-const decimalText = (min: number, max: number, scale: number) =>
-  fc.integer({ min: min * scale, max: max * scale }).map((n) => (n / scale).toFixed(Math.log10(scale)));
+const decimalText = (min: number, max: number, scale: number) => {
+  const dp = Math.round(Math.log10(scale));
+  return fc.integer({ min: Math.round(min * scale), max: Math.round(max * scale) }).map((n) => scaledText(n, dp));
+};
 
 const priceBreaks = fc
   .array(fc.record({ gap: fc.integer({ min: 1, max: 8000 }), price: fc.integer({ min: 1, max: 500_000 }) }), { minLength: 1, maxLength: 5 })
@@ -27,7 +30,7 @@ const priceBreaks = fc
     let min = 0;
     return rows.map((r) => {
       min += r.gap;
-      return { minQty: min, unitPrice: (r.price / 1e6).toFixed(6) };
+      return { minQty: min, unitPrice: scaledText(r.price, 6) };
     });
   });
 

@@ -1,3 +1,4 @@
+import { scaledText } from './test-factories';
 import type { BomLine, CostRollInput, Part, Quote } from './types';
 
 /**
@@ -25,7 +26,8 @@ export function bigBom(lineCount: number) {
         orderMultiple: [1, 100, 1000, 5000][j],
         leadTimeDays: 10 + j * 5,
         validUntil: j === 3 && i % 10 === 0 ? '2026-01-01' : null,
-        priceBreaks: [1, 100, 1000, 10_000, 100_000].map((minQty, k) => ({ minQty, unitPrice: (base * (5 - k)).toString().padStart(7, '0').replace(/^(\d)/, '0.$1') })),
+        // Prices in millionths, falling with quantity: 0.00xxxx.
+        priceBreaks: [1, 100, 1000, 10_000, 100_000].map((minQty, k) => ({ minQty, unitPrice: scaledText(base * (5 - k), 6) })),
         createdAt: '2026-02-01T00:00:00Z',
       });
     }

@@ -4,6 +4,12 @@
  */
 import type { BomLine, CostRollInput, FxRate, Part, PriceBreak, Quote, Supplier } from './types';
 
+/** An integer count of 10^-dp units as decimal text, built as a string (no float division). */
+export function scaledText(units: number, dp: number): string {
+  const digits = String(units).padStart(dp + 1, '0');
+  return dp === 0 ? digits : `${digits.slice(0, -dp)}.${digits.slice(-dp)}`;
+}
+
 let seq = 0;
 const nextId = (prefix: string) => `${prefix}-${(++seq).toString().padStart(4, '0')}`;
 

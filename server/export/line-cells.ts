@@ -105,10 +105,13 @@ export interface LineInput {
   internalPn: string | null;
   mpn: string | null;
   maker: string | null;
+  /** The part's category (the engine names none for DNP lines), else the engine's. */
+  category: string | null;
   supplierName: string | null;
   /** The line as stored: a cost line's unit cost in its own currency, the user's note. */
   qtyPerUnit: string;
   unitCost: string | null;
+  oneTimeCost: string | null;
   costCurrency: string | null;
   note: string;
 }
@@ -121,6 +124,11 @@ export interface LineRowModel {
 
 /** Money in results has 6 decimals: a formula is right when it is within one unit of the 6th. */
 const MONEY_TOLERANCE = new Dec('0.000001');
+/**
+ * The landed cost adds three figures the engine hands over rounded to 6 decimals (the
+ * freight with its share, the fees share, assembly): each may be off by half a unit.
+ */
+const LANDED_TOLERANCE = new Dec('0.000003');
 /** Converted unit prices have 10 decimals. */
 const PRICE_TOLERANCE = new Dec('0.000000001');
 const INSURED_SHARE = '1.1';
@@ -199,7 +207,7 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
     internalPn: input.internalPn ?? '',
     mpn: input.mpn ?? '',
     maker: input.maker ?? '',
-    category: line.category,
+    category: input.category ?? line.category,
     qtyPerUnit: Number(input.qtyPerUnit),
     requiredQty: line.requiredQty,
     orderQty: line.orderQty,
@@ -240,15 +248,19 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
     cells.unitPriceReporting = { formula: `${at('unitPrice')}*${at('fxRate')}` };
     const perUnit = dec(input.qtyPerUnit).times(price ?? ZERO).times(rate);
     const costPerUnit = formulaCell('costPerUnit', `${at('qtyPerUnit')}*${at('unitPriceReporting')}`, perUnit, dec(line.costPerUnit ?? '0'));
-    const oneTime = dec(line.oneTimeCost ?? '0');
+    // The one-time amount converted at full precision, as the engine does (its output has 6 decimals).
+    const engineOneTime = dec(line.oneTimeCost ?? '0');
+    const exactOneTime = input.oneTimeCost === null ? ZERO : dec(input.oneTimeCost).times(rate);
+    const oneTime = exactOneTime.minus(engineOneTime).abs().lte(MONEY_TOLERANCE) ? exactOneTime : engineOneTime;
     cells.oneTimeCost = oneTime.toNumber();
     const landed = formulaCell(
       'landed',
       `${at('costPerUnit')}*${N.ref}+${at('oneTimeCost')}*${N.ref}/${refs.amortisationQty.ref}`,
       costPerUnit.times(N.value).plus(oneTime.times(N.value).div(refs.amortisationQty.value)),
       dec(line.landed),
+      LANDED_TOLERANCE,
     );
-    formulaCell('landedPerUnit', `${at('landed')}/${N.ref}`, landed.div(N.value), dec(line.landedPerUnit));
+    formulaCell('landedPerUnit', `${at('landed')}/${N.ref}`, landed.div(N.value), dec(line.landedPerUnit), LANDED_TOLERANCE);
     return { cells, valuesInsteadOfFormulas };
   }
 
@@ -319,7 +331,8 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
     landedKeys.map(at).join('+'),
     [G, O, F, I, D, fees, dest, assembly].reduce((s, x) => s.plus(x), ZERO),
     dec(line.landed),
+    LANDED_TOLERANCE,
   );
-  formulaCell('landedPerUnit', `${at('landed')}/${N.ref}`, landed.div(N.value), dec(line.landedPerUnit));
+  formulaCell('landedPerUnit', `${at('landed')}/${N.ref}`, landed.div(N.value), dec(line.landedPerUnit), LANDED_TOLERANCE);
   return { cells, valuesInsteadOfFormulas };
 }

@@ -34,21 +34,47 @@ export function addSheet(wb: ExcelJS.stream.xlsx.WorkbookWriter, name: string, o
 export function putRow(ws: ExcelJS.Worksheet, rowNumber: number, cells: RowSpec, style: 'header' | 'bold' | 'plain' = 'plain'): void {
   const row = ws.getRow(rowNumber);
   cells.forEach((spec, i) => {
-    if (!spec || spec.value === null || spec.value === undefined) return;
+    if (!spec || spec.value === null || spec.value === undefined || spec.value === '') return;
     const cell = row.getCell(i + 1);
     // A string stays a string: exceljs writes it as a text cell, never as a formula.
     cell.value = typeof spec.value === 'string' ? safeText(spec.value) : (spec.value as ExcelJS.CellValue);
-    if (spec.numFmt) cell.numFmt = spec.numFmt;
-    if (style !== 'plain') cell.font = { bold: true };
-    if (style === 'header') {
-      cell.fill = HEADER_FILL;
-      cell.border = HEADER_BORDER;
-      cell.alignment = { wrapText: true, vertical: 'top' };
-    }
+    const shared = styleFor(style, spec.numFmt);
+    if (shared) cell.style = shared;
   });
   row.commit();
+}
+
+const styles = new Map<string, Partial<ExcelJS.Style>>();
+
+// One frozen style object per look: exceljs recognises a style object it has seen and
+// skips re-indexing it, which is most of the cost of a 200,000-cell sheet.
+function styleFor(kind: 'header' | 'bold' | 'plain', numFmt: string | undefined): Partial<ExcelJS.Style> | undefined {
+  if (kind === 'plain' && !numFmt) return undefined;
+  const key = `${kind}|${numFmt ?? ''}`;
+  let s = styles.get(key);
+  if (!s) {
+    s = {};
+    if (numFmt) s.numFmt = numFmt;
+    if (kind !== 'plain') s.font = { bold: true };
+    if (kind === 'header') {
+      s.fill = HEADER_FILL;
+      s.border = HEADER_BORDER;
+      s.alignment = { wrapText: true, vertical: 'top' };
+    }
+    styles.set(key, s);
+  }
+  return s;
 }
 
 export const text = (value: string): CellSpec => ({ value });
 export const numberCell = (value: number | null, numFmt: string): CellSpec => ({ value, numFmt });
 export const formulaCell = (formula: string, numFmt: string): CellSpec => ({ value: { formula }, numFmt });
+
+/**
+ * Lets the zip writer compress and send what has been written every `every` rows, so a
+ * large sheet streams out instead of piling up as XML in memory first.
+ */
+export function yielder(every = 250): () => Promise<void> | undefined {
+  let n = 0;
+  return () => (++n % every === 0 ? new Promise<void>((resolve) => setImmediate(resolve)) : undefined);
+}

@@ -31,6 +31,7 @@ export const errors = {
   tooLarge: (message: string) => new HttpError('too_large', message),
   unsupported: (message: string) => new HttpError('unsupported_type', message),
   unreadable: (message: string) => new HttpError('unreadable_file', message),
+  readOnly: (message: string) => new HttpError('read_only', message),
   linkExpired: (message: string) => new HttpError('link_expired', message),
   rateLimited: () => new HttpError('rate_limited', 'Too many attempts; wait a minute and try again.'),
   unavailable: () =>

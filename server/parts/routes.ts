@@ -32,6 +32,7 @@ export const partRoutes: RouteDef[] = [
       if (query.category) q.andWhere('parts.category', query.category);
       if (query.cursor) q.andWhere('parts.id', '>', query.cursor);
       if (query.q) applyPartSearch(q, query.q);
+      if (query.ids) q.andWhereRaw('parts.id = ANY(?::bigint[])', [query.ids]);
       const rows = (await q) as PartOut[];
       const p = page(rows, query.limit);
       return { items: p.items.map(view), nextCursor: p.nextCursor };

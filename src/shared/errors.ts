@@ -15,6 +15,7 @@ export const errorCodes = {
   not_found: 404,
   conflict: 409,
   stale_version: 409,
+  read_only: 409,
   link_expired: 410,
   too_large: 413,
   unsupported_type: 415,

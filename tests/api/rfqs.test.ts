@@ -89,7 +89,7 @@ describe('requests for quotation', () => {
       r.on('end', () => cb(null, Buffer.concat(chunks)));
     }).expect(200);
     const wb = new ExcelJS.Workbook();
-    await wb.xlsx.load(sheet.body as Buffer);
+    await wb.xlsx.load(sheet.body as unknown as ArrayBuffer);
     const ws = wb.worksheets[0];
     ws.getRow(2).getCell(10).value = 'not a date';
     ws.getRow(2).getCell(12).value = 0.0021;

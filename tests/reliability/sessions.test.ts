@@ -16,7 +16,7 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-const sid = (res: request.Response) => (res.headers['set-cookie'] as string[] | undefined)?.find((c) => c.startsWith('farthing.sid='))?.split(';')[0];
+const sid = (res: request.Response) => (res.headers['set-cookie'] as unknown as string[] | undefined)?.find((c) => c.startsWith('farthing.sid='))?.split(';')[0];
 
 describe('sessions and access', () => {
   it('session fixation: a session id planted before sign-in is not the one after', async () => {

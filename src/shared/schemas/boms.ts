@@ -130,6 +130,8 @@ export const lineParams = z.strictObject({ id: idParam, lineId: idParam });
 export const costQuery = z.strictObject({
   qty: z.coerce.number().int().min(1).max(100_000_000).optional(),
   date: isoDate.optional(),
+  /** `totals` leaves the per-line rows out (the running panel needs only the totals). */
+  view: z.enum(['full', 'totals']).default('full'),
 });
 
 export const curveQuery = z.strictObject({

@@ -107,6 +107,13 @@ export type PartPatchBody = z.infer<typeof partPatchBody>;
 
 export const partListQuery = z.strictObject({
   q: z.string().max(200).optional(),
+  /** Comma-separated ids: the parts a BOM's lines name, in one request. */
+  ids: z
+    .string()
+    .max(200_000)
+    .regex(/^[1-9][0-9]{0,17}(,[1-9][0-9]{0,17})*$/, 'must be comma-separated ids')
+    .transform((s) => s.split(','))
+    .optional(),
   category: partCategory.optional(),
   limit: z.coerce.number().int().min(1).max(20000).default(500),
   cursor: z.string().regex(/^\d+$/).optional(),

@@ -11,6 +11,8 @@ import type { Deps } from './deps';
 import { createMailer, type Mailer } from './mail/mailer';
 import { createOutbox } from './mail/outbox';
 import { createJobQueue, type JobQueue } from './jobs/queue';
+import { startRollupWorker } from './boms/rollup-worker';
+import { queueRefresh } from './boms/rollups';
 import { createSessionMiddleware, configurePassport } from './auth/session';
 import { csrfGuard } from './auth/csrf';
 import { resolveAuth } from './auth/resolve-auth';
@@ -58,7 +60,8 @@ export function createApp(opts: AppOptions): FarthingApp {
     opts.store ??
     createObjectStore({ endpoint: config.S3_ENDPOINT, region: config.S3_REGION, bucket: config.S3_BUCKET, accessKeyId: config.S3_ACCESS_KEY_ID, secretAccessKey: config.S3_SECRET_ACCESS_KEY });
   const stripe = opts.stripe ?? createStripe(config);
-  const deps: Deps = { db, config, mailer, logger, store, stripe };
+  const deps: Deps = { db, config, mailer, logger, store, stripe, queue };
+  deps.afterWrite = (workspaceId) => void queueRefresh(deps, workspaceId);
   const passport = configurePassport(db);
   const sessions = createSessionMiddleware(config, logger);
   const routes = routeTable(passport);
@@ -109,7 +112,7 @@ export function createApp(opts: AppOptions): FarthingApp {
   return {
     app,
     deps,
-    ready: outbox.started,
+    ready: Promise.all([outbox.started, startRollupWorker(deps)]).then(() => undefined),
     queue,
     close: async () => {
       await queue.stop();

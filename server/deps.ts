@@ -4,6 +4,7 @@ import type { Config } from './config';
 import type { Mailer } from './mail/mailer';
 import type { ObjectStore } from './files/object-store';
 import type Stripe from 'stripe';
+import type { JobQueue } from './jobs/queue';
 
 /** What every route and service may use; built once in createApp. */
 export interface Deps {
@@ -13,4 +14,7 @@ export interface Deps {
   logger: Logger;
   store: ObjectStore;
   stripe: Stripe;
+  queue: JobQueue;
+  /** Called after every successful signed-in write (e.g. to queue roll-up refreshes). */
+  afterWrite?: (workspaceId: string) => void;
 }

@@ -10,8 +10,10 @@ import { updateOrConflict } from '../db/versioned';
 import { audit } from '../audit/repository';
 import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
-import { costOf, curveOf, ladderOf, rollupsFor } from './cost';
+import { costOf, curveOf, ladderOf } from './cost';
+import { rollupsFor, plannedCost } from './rollups';
 import { releaseGuards } from './release-guards';
+import { today } from '../quotes/repository';
 import { importBom } from './import';
 import { saveSnapshot, listSnapshots, compare } from './compare';
 import { snapshotBody, compareQuery } from '../../src/shared/schemas/boms';
@@ -31,7 +33,7 @@ export const bomRoutes: RouteDef[] = [
       const q = scoped(deps.db, 'boms', auth.workspaceId).orderBy([{ column: 'name' }, { column: 'revision', order: 'desc' }]);
       if (query.q) q.andWhere('name', 'ilike', `%${query.q.replace(/[%_\\]/g, '\\$&')}%`);
       const boms = (await q) as BomRow[];
-      const rollups = await rollupsFor(deps.db, auth.workspaceId, boms);
+      const rollups = await rollupsFor(deps, auth.workspaceId, boms);
       const counts = (await scoped(deps.db, 'bom_lines', auth.workspaceId).groupBy('bomId').select('bomId').count('* as n')) as { bomId: string; n: string }[];
       const lineCount = new Map(counts.map((c) => [c.bomId, Number(c.n)]));
       const tallies = await releaseGuards.tallies(deps, auth.workspaceId, boms);
@@ -41,7 +43,7 @@ export const bomRoutes: RouteDef[] = [
           return {
             ...bomView(b),
             lineCount: lineCount.get(b.id) ?? 0,
-            cost: r ? { qty: r.qty, currency: r.currency, landedPerUnit: r.landedPerUnit, leftOut: r.leftOut, warnings: r.warnings, costingDate: r.costingDate } : null,
+            cost: r ? { qty: r.qty, currency: r.currency, landedPerUnit: r.landedPerUnit, leftOut: r.leftOut, warnings: r.warnings, costingDate: r.costingDate, fresh: r.fresh } : null,
             stress: tallies.get(b.id) ?? null,
           };
         }),
@@ -174,7 +176,9 @@ export const bomRoutes: RouteDef[] = [
     summary: 'The cost roll: landed cost per unit at a build quantity (default: planned) and costing date (default: today), per line and in totals, in the reporting currency.',
     params: idParams, query: costQuery,
     handler: async ({ auth, params, query, deps }) => {
-      const cost = await costOf(deps.db, auth.workspaceId, await getBom(deps.db, auth.workspaceId, params.id), query.qty, query.date);
+      const bom = await getBom(deps.db, auth.workspaceId, params.id);
+      const planned = (query.qty === undefined || query.qty === bom.plannedQty) && (query.date === undefined || query.date === today());
+      const cost = planned ? await plannedCost(deps, auth.workspaceId, bom) : await costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
       return query.view === 'totals' ? { ...cost, lines: [] } : cost;
     },
   }),

@@ -39,6 +39,7 @@ describe('per-shipment freight and fees are shared over the chosen quotes', () =
     );
     // Freight 400 over FOB goods 300 : 100; DDP carries none. Fees 200 over the same two.
     expect([line(r, 'a').freight, line(r, 'b').freight, line(r, 'c').freight]).toEqual(['300.000000', '100.000000', '0.000000']);
+    expect(line(r, 'a').freightShare).toBe('300.000000');
     expect([line(r, 'a').fees, line(r, 'b').fees, line(r, 'c').fees]).toEqual(['150.000000', '50.000000', '0.000000']);
     // Final insurance and duty include the share: 1 % × 1.10 × (300 + 300) = 6.60; 5 % × 606.60 = 30.33.
     expect(line(r, 'a').insurance).toBe('6.600000');
@@ -54,6 +55,7 @@ describe('per-shipment freight and fees are shared over the chosen quotes', () =
     const b = bought('b', '0.10', { incoterm: 'FCA' }, { unitWeightG: '1.5' });
     const r = costRoll(input([a, b], { profile: { freightPerShipment: '400', shipments: 1, freightBasis: 'weight' } }));
     expect([line(r, 'a').freight, line(r, 'b').freight]).toEqual(['100.000000', '300.000000']);
+    expect([line(r, 'a').freightShare, line(r, 'b').freightShare]).toEqual(['100.000000', '300.000000']);
   });
 
   it('converts the per-shipment freight from its own currency', () => {

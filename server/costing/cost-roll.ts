@@ -47,11 +47,10 @@ interface PreparedLine {
   oneTimeCost: Dec | null;
 }
 
-interface QuoteSlot {
-  pq: PreparedQuote;
-  /** Eligibility on the costing date, FX aside (fixed for the roll, so computed once). */
-  reasons: IneligibleReason[];
-}
+/** A prepared quote with its eligibility on the costing date, FX aside (fixed for the roll). */
+type QuoteSlot = PreparedQuote & { reasons: readonly IneligibleReason[] };
+
+const ELIGIBLE: readonly IneligibleReason[] = Object.freeze([]);
 
 type Converted = { ok: true; value: Dec; rows: FxRateUsed[] } | { ok: false; detail: string };
 
@@ -112,8 +111,10 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
   const quotesByPart = new Map<string, QuoteSlot[]>();
   const quotesById = new Map<string, QuoteSlot>();
   input.quotes.forEach((q, i) => {
-    const pq = prepareQuote(q, suppliers, i);
-    const slot = { pq, reasons: eligibilityReasons(pq, date, profile.maxLeadTimeDays) };
+    // One object per quote: a 10,000-line BOM brings 40,000 of them.
+    const slot = prepareQuote(q, suppliers, i) as QuoteSlot;
+    const reasons = eligibilityReasons(slot, date, profile.maxLeadTimeDays);
+    slot.reasons = reasons.length === 0 ? ELIGIBLE : reasons;
     let list = quotesByPart.get(q.partId);
     if (!list) quotesByPart.set(q.partId, (list = []));
     list.push(slot);
@@ -228,6 +229,7 @@ interface Work {
   fxRows: FxRateUsed[];
   // Filled in the second pass; `adders` is dropped once the line's output is written.
   adders?: LineAdders;
+  freightShare?: Dec;
   out?: CostRollLine;
   assembly: Dec;
   landed: Dec;
@@ -282,12 +284,12 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
   const fxFor = p.toReporting;
   for (const slot of slots) {
     if (slot.reasons.length > 0) continue;
-    const rate = fxFor(slot.pq.quote.currency);
+    const rate = fxFor(slot.quote.currency);
     if (!rate.ok) {
       fxMissing ??= fxDetail(rate.from, rate.to, p.date);
       continue;
     }
-    const priced = priceQuote(slot.pq, required, rate, duty, p.factors);
+    const priced = priceQuote(slot, required, rate, duty, p.factors);
     if (!best || compareQuotes(priced, best) < 0) best = priced;
   }
 
@@ -295,18 +297,18 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
   const pinnedId = pl.line.pinnedQuoteId;
   if (pinnedId) {
     const slot = p.quotesById.get(pinnedId);
-    if (!slot || slot.pq.quote.partId !== part.id) {
+    if (!slot || slot.quote.partId !== part.id) {
       w.warnings.push({ code: 'pinned_not_found', detail: pinnedId });
     } else {
-      const rate = fxFor(slot.pq.quote.currency);
+      const rate = fxFor(slot.quote.currency);
       if (!rate.ok) return leaveOut(w, 'missing_fx', fxDetail(rate.from, rate.to, p.date));
-      const pinned = priceQuote(slot.pq, required, rate, duty, p.factors);
+      const pinned = priceQuote(slot, required, rate, duty, p.factors);
       for (const r of slot.reasons) {
         const code = PINNED_WARNING[r];
         if (code) w.warnings.push({ code });
       }
       const noLongerValid = slot.reasons.includes('expired') || slot.reasons.includes('not_yet_valid');
-      if (!noLongerValid && best && best.pq !== slot.pq && best.boardLanded.lt(pinned.boardLanded)) {
+      if (!noLongerValid && best && best.pq !== slot && best.boardLanded.lt(pinned.boardLanded)) {
         w.warnings.push({ code: 'pinned_not_cheapest', detail: best.pq.quote.id });
       }
       chosen = pinned;
@@ -505,13 +507,14 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     noteFx(w.fxRows);
     if (w.chosen) {
       const c = w.chosen;
+      w.freightShare = freightShares?.get(w);
       w.adders = lineAdders({
         goods: w.goods!,
         incoterm: c.pq.incoterm,
         pct: p.profile.pct,
         dutyBasis: p.profile.dutyBasis,
         dutyRate: w.duty!.rate,
-        freightShare: freightShares?.get(w),
+        freightShare: w.freightShare,
         feesShare: feeShares?.get(w),
       });
       w.assembly = w.assemblyPerUnit.isZero() ? ZERO : w.assemblyPerUnit.times(N);
@@ -657,6 +660,7 @@ function lineOutput(w: Work, N: Dec): CostRollLine {
     excessValue: a ? moneyText(w.excessValue!) : zero,
     origin: a ? moneyText(a.origin) : zero,
     freight: a ? moneyText(a.freight) : zero,
+    freightShare: a && w.freightShare ? moneyText(w.freightShare) : zero,
     insurance: a ? moneyText(a.insurance) : zero,
     customsValue: a && a.customsValue ? moneyText(a.customsValue) : null,
     dutyPct: w.duty ? w.duty.ratePct.toString() : null,

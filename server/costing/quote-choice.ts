@@ -1,4 +1,4 @@
-import { dec, Dec, moneyText, perUnitText } from './decimal';
+import { Dec, moneyText, perUnitText } from './decimal';
 import { CostingInputError } from './errors';
 import { createFxIndex, type FxFound, type FxIndex } from './fx';
 import { assertIncoterm, isIncoterm } from './incoterms';

@@ -292,7 +292,10 @@ export interface CostRollLine {
   goodsValue: DecimalString;
   excessValue: DecimalString;
   origin: DecimalString;
+  /** freightPct × G plus `freightShare`. */
   freight: DecimalString;
+  /** The line's share of the build's per-shipment freight (part of `freight`). */
+  freightShare: DecimalString;
   insurance: DecimalString;
   customsValue: DecimalString | null;
   dutyPct: DecimalString | null;

@@ -188,15 +188,16 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
   const cells: LineRowModel['cells'] = {};
   const valuesInsteadOfFormulas: LineKey[] = [];
 
-  /** Writes `formula` when its exact value matches the engine's figure, else the engine's figure. */
-  const formulaCell = (key: LineKey, formula: string, mirror: Dec, engine: Dec, tolerance = MONEY_TOLERANCE): Dec => {
-    if (mirror.minus(engine).abs().lte(tolerance)) {
-      cells[key] = { formula };
-      return mirror;
-    }
+  const engineValue = (key: LineKey, engine: Dec): Dec => {
     cells[key] = engine.toNumber();
     valuesInsteadOfFormulas.push(key);
     return engine;
+  };
+  /** Writes `formula` when its exact value matches the engine's figure, else the engine's figure. */
+  const formulaCell = (key: LineKey, formula: string, mirror: Dec, engine: Dec, tolerance = MONEY_TOLERANCE): Dec => {
+    if (mirror.minus(engine).abs().gt(tolerance)) return engineValue(key, engine);
+    cells[key] = { formula };
+    return mirror;
   };
 
   const warningText = line.warnings.map((w) => (w.detail ? `${w.code} (${w.detail})` : w.code)).join('; ');
@@ -230,14 +231,15 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
     return { cells, valuesInsteadOfFormulas };
   }
 
-  // The rate to the reporting currency: 1, or a formula over the Summary's FX table.
+  // The rate to the reporting currency: 1, a formula over the Summary's FX table, or (for
+  // a row missing from that table, which the roll's list of rates rules out) unknown.
   const price = line.kind === 'part' ? (line.unitPrice === null ? null : dec(line.unitPrice)) : input.unitCost === null ? null : dec(input.unitCost);
   const fx = fxFormula(line.fxRates, refs);
-  let rate: Dec;
+  let rate: Dec | null = null;
   if (fx) {
     cells.fxRate = { formula: fx.formula };
     rate = fx.value;
-  } else {
+  } else if (line.fxRates.length === 0) {
     cells.fxRate = 1;
     rate = new Dec(1);
   }
@@ -245,12 +247,14 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
   if (line.kind !== 'part') {
     cells.currency = (input.costCurrency ?? '').toUpperCase();
     cells.unitPrice = num(price);
-    cells.unitPriceReporting = { formula: `${at('unitPrice')}*${at('fxRate')}` };
-    const perUnit = dec(input.qtyPerUnit).times(price ?? ZERO).times(rate);
-    const costPerUnit = formulaCell('costPerUnit', `${at('qtyPerUnit')}*${at('unitPriceReporting')}`, perUnit, dec(line.costPerUnit ?? '0'));
+    if (rate) cells.unitPriceReporting = { formula: `${at('unitPrice')}*${at('fxRate')}` };
+    const engineCost = dec(line.costPerUnit ?? '0');
+    const costPerUnit = rate
+      ? formulaCell('costPerUnit', `${at('qtyPerUnit')}*${at('unitPriceReporting')}`, dec(input.qtyPerUnit).times(price ?? ZERO).times(rate), engineCost)
+      : engineValue('costPerUnit', engineCost);
     // The one-time amount converted at full precision, as the engine does (its output has 6 decimals).
     const engineOneTime = dec(line.oneTimeCost ?? '0');
-    const exactOneTime = input.oneTimeCost === null ? ZERO : dec(input.oneTimeCost).times(rate);
+    const exactOneTime = input.oneTimeCost === null || !rate ? ZERO : dec(input.oneTimeCost).times(rate);
     const oneTime = exactOneTime.minus(engineOneTime).abs().lte(MONEY_TOLERANCE) ? exactOneTime : engineOneTime;
     cells.oneTimeCost = oneTime.toNumber();
     const landed = formulaCell(
@@ -268,14 +272,12 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
   const needs = (a: AdderName) => INCOTERM_ADDERS[incoterm][a];
   const converted = dec(line.unitPriceConverted!);
   let upr: Dec;
-  if (price !== null && price.times(rate).minus(converted).abs().lte(PRICE_TOLERANCE)) {
+  if (price !== null && rate && price.times(rate).minus(converted).abs().lte(PRICE_TOLERANCE)) {
     cells.unitPriceReporting = { formula: `${at('unitPrice')}*${at('fxRate')}` };
     upr = price.times(rate);
   } else {
     cells.fxRate = price && !price.isZero() ? converted.div(price).toNumber() : null;
-    cells.unitPriceReporting = converted.toNumber();
-    valuesInsteadOfFormulas.push('unitPriceReporting');
-    upr = converted;
+    upr = engineValue('unitPriceReporting', converted);
   }
 
   const G = formulaCell('goods', `${at('orderQty')}*${at('unitPriceReporting')}`, upr.times(line.orderQty!), dec(line.goodsValue));
@@ -310,9 +312,7 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
   if (terms && line.customsValue !== null) {
     CV = formulaCell('customsValue', terms.map(at).join('+'), terms.reduce((s, k) => s.plus(parts[k]), ZERO), dec(line.customsValue));
   } else if (line.customsValue !== null) {
-    CV = dec(line.customsValue);
-    cells.customsValue = CV.toNumber();
-    valuesInsteadOfFormulas.push('customsValue');
+    CV = engineValue('customsValue', dec(line.customsValue));
   }
   const dutyPct = needs('duty') && line.customsValue !== null ? dec(line.dutyPct ?? '0').div(100) : ZERO;
   cells.dutyPct = dutyPct.toNumber();

@@ -38,6 +38,7 @@ export function buildRouter(routes: RouteDef[], deps: Deps, limiters: { auth: Mi
         else if (def.body) body = parseInput(def.body, req.body ?? {}, 'body');
         else if (hasBody(req.body)) throw errors.validation('This request takes no body.', [{ path: 'body', message: 'must be empty' }]);
         const result = await def.handler({ req, res, body, params, query, auth, deps, upload } as never);
+        if (auth && def.method !== 'get' && res.statusCode < 400) deps.afterWrite?.(auth.workspaceId);
         if (res.headersSent) return;
         if (result === undefined) res.status(def.status ?? 204).end();
         else res.status(def.status ?? 200).json(result);

@@ -172,8 +172,11 @@ describe('the stored roll-up', () => {
     expect(stored.landedPerUnit).toBe('0.0150000000');
     const q = (await ws.agents.owner.get('/api/quotes').query({ partId: partB.id })).body.items[0];
     await ws.agents.buyer.patch(`/api/quotes/${q.id}`).send({ version: q.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0120' }] }).expect(200);
-    const second = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id);
-    expect(second.cost.landedPerUnit).toBe('0.0120000000');
+    // The list never waits for a recompute: the refresh is queued by the write and lands shortly.
+    await expect.poll(async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id).cost, { timeout: 10_000 })
+      .toMatchObject({ landedPerUnit: '0.0120000000', fresh: true });
+    const fresh = await t.database.db('cost_rollups').where({ bomId: bom.id }).first();
+    expect(fresh.result.totals.landedPerUnit).toBe('0.0120000000');
   });
 
   it('snapshots and revisions compare per line and in totals', async () => {

@@ -1,0 +1,125 @@
+import type { Knex } from 'knex';
+import type { DbOrTrx } from '../db/knex';
+import type { Deps } from '../deps';
+import { scoped } from '../db/scope';
+import { today } from '../quotes/repository';
+import { costOf, type CostView } from './cost';
+import type { BomRow } from './repository';
+
+export const ROLLUP_QUEUE = 'cost-rollup';
+
+export interface RollupRow {
+  bomId: string;
+  workspaceId: string;
+  epoch: string;
+  costingDate: string;
+  qty: number;
+  currency: string;
+  landedPerUnit: string | null;
+  targetUnitCost: string | null;
+  leftOut: number;
+  warnings: number;
+  totals: unknown;
+  computedAt?: Date;
+}
+
+/**
+ * The stored cost roll of each BOM at its planned quantity and today's date. It is fresh
+ * while the workspace's costing epoch (bumped by triggers on every input: lines, parts,
+ * quotes, price breaks, suppliers, rates, profiles, BOMs) and the date and quantity still
+ * match. Reads never wait for a recompute once a roll-up exists: a stale one is served
+ * marked `fresh: false` and a refresh is queued; writes queue a refresh too.
+ */
+export async function epochOf(db: DbOrTrx, workspaceId: string): Promise<string> {
+  const ws = await db('workspaces').where({ id: workspaceId }).first('costingEpoch');
+  return String(ws?.costingEpoch ?? 0);
+}
+
+const isFresh = (r: { epoch: string; costingDate: string; qty: number } | undefined, epoch: string, bom: BomRow) =>
+  Boolean(r && String(r.epoch) === epoch && r.costingDate === today() && r.qty === bom.plannedQty);
+
+// Concurrent requests for the same roll in this process share one computation.
+const inFlight = new Map<string, Promise<CostView>>();
+
+/** Computes and stores the roll-up of one BOM (the whole result and its totals). */
+export async function refreshRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?: string): Promise<CostView> {
+  const e = epoch ?? (await epochOf(db, workspaceId));
+  const key = `${workspaceId}:${bom.id}:${e}:${bom.plannedQty}:${today()}`;
+  const running = inFlight.get(key);
+  if (running) return running;
+  const work = (async () => {
+    const cost = await costOf(db, workspaceId, bom);
+    const row = {
+      bomId: bom.id, workspaceId, epoch: e, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency,
+      landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
+      warnings: cost.warnings.length + cost.lines.reduce((n, l) => n + l.warnings.length, 0),
+      totals: JSON.stringify(cost.totals), result: JSON.stringify(cost), computedAt: db.fn.now(),
+    };
+    await db('cost_rollups').insert(row).onConflict('bom_id').merge();
+    return cost;
+  })();
+  inFlight.set(key, work);
+  try {
+    return await work;
+  } finally {
+    inFlight.delete(key);
+  }
+}
+
+/** For the BOM list: stored roll-ups, computing only those that never existed. */
+export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]) {
+  const epoch = await epochOf(deps.db, workspaceId);
+  const stored = boms.length
+    ? ((await scoped(deps.db, 'cost_rollups', workspaceId).andWhereRaw('bom_id = ANY(?::bigint[])', [boms.map((b) => b.id)])
+      .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'computedAt')) as RollupRow[])
+    : [];
+  const byBom = new Map(stored.map((r) => [r.bomId, r]));
+  const out = new Map<string, RollupRow & { fresh: boolean }>();
+  let stale = false;
+  for (const bom of boms) {
+    const r = byBom.get(bom.id);
+    if (r) {
+      const fresh = isFresh(r, epoch, bom);
+      stale ||= !fresh;
+      out.set(bom.id, { ...r, fresh });
+      continue;
+    }
+    const cost = await refreshRollup(deps.db, workspaceId, bom, epoch);
+    out.set(bom.id, {
+      bomId: bom.id, workspaceId, epoch, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency, landedPerUnit: cost.totals.landedPerUnit,
+      targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count, warnings: cost.warnings.length, totals: cost.totals, fresh: true,
+    });
+  }
+  if (stale) await queueRefresh(deps, workspaceId);
+  return out;
+}
+
+/** The cost roll at the planned quantity today: the stored one when fresh, else computed and stored. */
+export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView> {
+  const epoch = await epochOf(deps.db, workspaceId);
+  const r = await scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
+    .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'result');
+  if (r?.result && isFresh(r, epoch, bom)) return r.result as CostView;
+  return refreshRollup(deps.db, workspaceId, bom, epoch);
+}
+
+/** Queues one refresh of a workspace's stale roll-ups (at most one waiting per workspace). */
+export async function queueRefresh(deps: Deps, workspaceId: string): Promise<void> {
+  await deps.queue.ready;
+  await deps.queue.boss.send(ROLLUP_QUEUE, { workspaceId }, { singletonKey: `rollup:${workspaceId}`, singletonSeconds: 1, retryLimit: 3 }).catch(() => undefined);
+}
+
+/** The worker: recomputes every stale roll-up of the workspace. */
+export async function refreshWorkspace(deps: Deps, workspaceId: string): Promise<number> {
+  const epoch = await epochOf(deps.db, workspaceId);
+  const boms = (await scoped(deps.db, 'boms', workspaceId)) as BomRow[];
+  const stored = (await scoped(deps.db, 'cost_rollups', workspaceId).select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty')) as RollupRow[];
+  const byBom = new Map(stored.map((r) => [r.bomId, r]));
+  let n = 0;
+  for (const bom of boms) {
+    if (isFresh(byBom.get(bom.id), epoch, bom)) continue;
+    await refreshRollup(deps.db, workspaceId, bom, epoch);
+    n++;
+  }
+  return n;
+}

@@ -214,7 +214,6 @@ interface Work {
   leftOut?: { reason: LeftOutReason; detail?: string };
   warnings: LineWarning[];
   category: string;
-  part?: Part;
   required?: number;
   chosen?: PricedQuote;
   /** The chosen quote's goods value G in the reporting currency. */
@@ -269,7 +268,6 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
   const { pl } = w;
   const part = pl.line.partId ? p.parts.get(pl.line.partId) : undefined;
   if (!part) return leaveOut(w, 'no_part', pl.line.partId ?? undefined);
-  w.part = part;
   w.category = part.category;
   const attrition = pl.attrition ?? p.profile.attrition.get(part.category) ?? ZERO;
   const required = toCount(requiredQty(pl.qtyPerUnit, buildQty, attrition), `lines.${pl.index}.requiredQty`);

@@ -58,6 +58,12 @@ export function createRoutes(client: QueryClient): RouteObject[] {
           ),
         },
         {
+          // A supplier's answer page: public, outside the signed-in frame; the token is the key.
+          path: '/rfq/:token',
+          hydrateFallbackElement: opening,
+          ...screen(() => import('./routes/rfq-reply/rfq-reply'), (m) => ({ Component: m.RfqReplyRoute, loader: m.rfqReplyLoader(client) })),
+        },
+        {
           path: '/reset-password',
           hydrateFallbackElement: opening,
           ...screen(() => import('./routes/auth/reset-password-request'), (m) => ({ Component: m.ResetPasswordRequestRoute })),
@@ -77,32 +83,107 @@ export function createRoutes(client: QueryClient): RouteObject[] {
               errorElement: <RouteError />,
               children: [
                 { index: true, loader: () => redirect('/boms') },
-                { path: 'boms', ...screen(() => import('./routes/boms/boms-list'), (m) => ({ Component: m.BomsListRoute })) },
-                { path: 'parts', ...screen(() => import('./routes/parts/parts-list'), (m) => ({ Component: m.PartsListRoute })) },
+                {
+                  path: 'boms',
+                  ...screen(() => import('./routes/boms/boms-list'), (m) => ({ Component: m.BomsListRoute, loader: m.bomsListLoader(client) })),
+                },
+                {
+                  // The BOM page: heading, tabs (each an address) and the running total.
+                  path: 'boms/:bomId',
+                  ...screen(() => import('./routes/boms/bom-page'), (m) => ({ Component: m.BomPageRoute, loader: m.bomPageLoader(client) })),
+                  children: [
+                    // The bare address opens the Lines tab (element null: nothing shows before the redirect).
+                    { index: true, element: null, loader: ({ params }) => redirect(`/boms/${params.bomId}/lines`) },
+                    {
+                      path: 'lines',
+                      ...screen(() => import('./routes/boms/bom-lines'), (m) => ({ Component: m.BomLinesRoute, loader: m.bomLinesLoader(client) })),
+                    },
+                    { path: 'cost-roll', ...screen(() => import('./routes/boms/bom-cost-roll'), (m) => ({ Component: m.BomCostRollRoute })) },
+                    {
+                      path: 'stress-check',
+                      ...screen(() => import('./routes/boms/bom-stress-check'), (m) => ({ Component: m.BomStressCheckRoute, loader: m.bomStressCheckLoader(client) })),
+                    },
+                    { path: 'volume-curve', ...screen(() => import('./routes/boms/bom-volume-curve'), (m) => ({ Component: m.BomVolumeCurveRoute })) },
+                    {
+                      path: 'shelf-price-ladder',
+                      ...screen(() => import('./routes/boms/bom-shelf-ladder'), (m) => ({ Component: m.BomShelfLadderRoute })),
+                    },
+                    { path: 'revisions', ...screen(() => import('./routes/boms/bom-revisions'), (m) => ({ Component: m.BomRevisionsRoute })) },
+                  ],
+                },
+                {
+                  path: 'parts',
+                  ...screen(
+                    () => import('./routes/parts/parts-list'),
+                    (m) => ({ Component: m.PartsListRoute, loader: m.partsListLoader(client) }),
+                  ),
+                },
+                {
+                  path: 'parts/:id',
+                  ...screen(
+                    () => import('./routes/parts/part-detail'),
+                    (m) => ({ Component: m.PartDetailRoute, loader: m.partDetailLoader(client) }),
+                  ),
+                },
+                {
+                  path: 'parts/:id/offers',
+                  lazy: async () => ({ loader: (await import('./routes/parts/part-offers-redirect')).partOffersLoader }),
+                },
+                { path: 'tools', ...screen(() => import('./routes/tools/circuit-helpers'), (m) => ({ Component: m.CircuitHelpersRoute })) },
                 {
                   path: 'suppliers',
-                  ...screen(() => import('./routes/suppliers/suppliers-list'), (m) => ({ Component: m.SuppliersListRoute })),
+                  ...screen(
+                    () => import('./routes/suppliers/suppliers-list'),
+                    (m) => ({ Component: m.SuppliersListRoute, loader: m.suppliersListLoader(client) }),
+                  ),
+                },
+                {
+                  path: 'suppliers/:id',
+                  ...screen(
+                    () => import('./routes/suppliers/supplier-detail'),
+                    (m) => ({ Component: m.SupplierDetailRoute, loader: m.supplierDetailLoader(client) }),
+                  ),
                 },
                 {
                   path: 'quote-board',
-                  ...screen(() => import('./routes/quote-board/quote-board'), (m) => ({ Component: m.QuoteBoardRoute })),
+                  ...screen(
+                    () => import('./routes/quote-board/quote-board'),
+                    (m) => ({ Component: m.QuoteBoardRoute, loader: m.quoteBoardLoader(client) }),
+                  ),
                 },
-                { path: 'rfqs', ...screen(() => import('./routes/rfqs/rfqs-list'), (m) => ({ Component: m.RfqsListRoute })) },
+                {
+                  path: 'rfqs',
+                  ...screen(() => import('./routes/rfqs/rfqs-list'), (m) => ({ Component: m.RfqsListRoute, loader: m.rfqsListLoader(client) })),
+                },
+                {
+                  path: 'rfqs/new',
+                  ...screen(() => import('./routes/rfqs/rfq-new'), (m) => ({ Component: m.RfqNewRoute, loader: m.rfqNewLoader(client) })),
+                },
+                {
+                  path: 'rfqs/:id',
+                  ...screen(() => import('./routes/rfqs/rfq-detail'), (m) => ({ Component: m.RfqDetailRoute, loader: m.rfqDetailLoader(client) })),
+                },
                 { path: 'settings', loader: () => redirect('/settings/members') },
                 {
                   path: 'settings/landed-cost-profiles',
                   ...screen(
                     () => import('./routes/settings/landed-cost-profiles'),
-                    (m) => ({ Component: m.LandedCostProfilesRoute }),
+                    (m) => ({ Component: m.LandedCostProfilesRoute, loader: m.landedCostProfilesLoader(client) }),
                   ),
                 },
                 {
                   path: 'settings/fx-rates',
-                  ...screen(() => import('./routes/settings/fx-rates'), (m) => ({ Component: m.FxRatesRoute })),
+                  ...screen(
+                    () => import('./routes/settings/fx-rates'),
+                    (m) => ({ Component: m.FxRatesRoute, loader: m.fxRatesLoader(client) }),
+                  ),
                 },
                 {
                   path: 'settings/stress-policies',
-                  ...screen(() => import('./routes/settings/stress-policies'), (m) => ({ Component: m.StressPoliciesRoute })),
+                  ...screen(
+                    () => import('./routes/settings/stress-policies'),
+                    (m) => ({ Component: m.StressPoliciesRoute, loader: m.stressPoliciesLoader(client) }),
+                  ),
                 },
                 {
                   path: 'settings/members',
@@ -120,7 +201,7 @@ export function createRoutes(client: QueryClient): RouteObject[] {
                 },
                 {
                   path: 'settings/billing',
-                  ...screen(() => import('./routes/settings/billing'), (m) => ({ Component: m.BillingRoute })),
+                  ...screen(() => import('./routes/settings/billing'), (m) => ({ Component: m.BillingRoute, loader: m.billingLoader(client) })),
                 },
                 {
                   path: 'api-reference',

@@ -1,5 +1,5 @@
 import Decimal from 'decimal.js';
-import { minorUnits } from '../../server/costing/minor-units';
+import { minorUnits } from '../shared/minor-units';
 
 // Half-up, as the costing rules round for display; a private constructor so the
 // library's global settings stay untouched for anyone else.

@@ -10,6 +10,7 @@ type NavItem = { to: string; label: string; action: Action | null };
 const areas: NavItem[] = [
   { to: '/boms', label: 'BOMs', action: 'boms.read' },
   { to: '/parts', label: 'Parts', action: 'parts.read' },
+  { to: '/tools', label: 'Circuit helpers', action: null },
   { to: '/suppliers', label: 'Suppliers', action: 'suppliers.read' },
   { to: '/quote-board', label: 'Quote board', action: 'quotes.read' },
   { to: '/rfqs', label: 'RFQs', action: 'rfqs.read' },

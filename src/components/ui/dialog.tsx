@@ -40,7 +40,7 @@ export function Dialog({
         event.preventDefault();
         onClose();
       }}
-      className={`m-auto max-h-[92vh] w-[calc(100%-2rem)] ${widths[size]} rounded-lg border border-rule bg-surface p-0 text-ink shadow-xl backdrop:bg-ink/30`}
+      className={`m-auto max-h-[92vh] w-[calc(100%-2rem)] overflow-y-auto ${widths[size]} rounded-lg border border-rule bg-surface p-0 text-ink shadow-xl backdrop:bg-ink/30`}
     >
       {open ? (
         <div className="flex flex-col gap-4 p-6">

@@ -4,7 +4,7 @@ type Tone = 'neutral' | 'copper' | 'muted' | 'warning' | 'ok';
 
 const tones: Record<Tone, string> = {
   neutral: 'border-rule bg-paper text-ink',
-  copper: 'border-copper bg-copper text-white',
+  copper: 'border-copper bg-copper/10 text-copper-dark',
   muted: 'border-rule bg-rule/40 text-muted',
   warning: 'border-brick/40 bg-brick/5 text-brick',
   ok: 'border-verdigris/40 bg-verdigris/5 text-verdigris',

@@ -7,6 +7,8 @@ import { inviteKeys, memberKeys, type Invite, type Member } from './api';
 // The session's own key, written out rather than imported: areas do not import each
 // other. A role change or removal may concern the person signed in.
 const sessionKey = ['auth', 'me'] as const;
+// The plan's usage counts members and pending invitations (its limit banner reads it).
+const billingKey = ['billing'] as const;
 
 export function useChangeMemberRole() {
   const queryClient = useQueryClient();
@@ -29,6 +31,7 @@ export function useRemoveMember() {
       Promise.all([
         queryClient.invalidateQueries({ queryKey: memberKeys.all }),
         queryClient.invalidateQueries({ queryKey: sessionKey }),
+        queryClient.invalidateQueries({ queryKey: billingKey }),
       ]),
   });
 }
@@ -37,7 +40,8 @@ export function useSendInvite() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: InviteBody) => api.post<Invite>('/api/invites', body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: inviteKeys.all }),
+    onSuccess: () =>
+      Promise.all([queryClient.invalidateQueries({ queryKey: inviteKeys.all }), queryClient.invalidateQueries({ queryKey: billingKey })]),
   });
 }
 
@@ -45,6 +49,7 @@ export function useRevokeInvite() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (inviteId: string) => api.delete(`/api/invites/${encodeURIComponent(inviteId)}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: inviteKeys.all }),
+    onSuccess: () =>
+      Promise.all([queryClient.invalidateQueries({ queryKey: inviteKeys.all }), queryClient.invalidateQueries({ queryKey: billingKey })]),
   });
 }

@@ -95,6 +95,8 @@ export const partFormSchema = z
     return ratings.ok && !Number.isNaN(pins) ? body.data : z.NEVER;
   });
 
+export type PartFormOutput = z.output<typeof partFormSchema>;
+
 /** The form's fields, for putting a server's field problems in place. */
 export const partFormFields = [
   'internalPn', 'mpn', 'manufacturer', 'category', 'description', 'package', 'mount', 'pins', 'hsCode', 'unitWeightG', 'ratings',

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ratingsByCategory } from '../../shared/schemas/parts';
-import { formatRating, previewRating, ratingFields, ratingFieldsFor, ratingsFromTexts, ratingTexts } from './ratings';
+import { formatRating, previewRating, ratingFields, ratingFieldsFor, ratingsFromTexts, ratingSummary, ratingTexts } from './ratings';
 
 const def = (category: string, key: string) => ratingFieldsFor(category).find((d) => d.key === key)!;
 
@@ -60,5 +60,13 @@ describe('rating fields', () => {
     expect(formatRating(def('capacitor', 'dielectric'), 'x7r')).toBe('X7R');
     expect(formatRating(def('diode', 'tjMaxC'), 150)).toBe('150 °C');
     expect(formatRating(def('diode', 'tjMaxC'), undefined)).toBe('—');
+  });
+});
+
+describe('the ratings line of a table row', () => {
+  it('lists the headline ratings with units', () => {
+    expect(ratingSummary('resistor', { resistanceOhm: 22e6, powerW: 0.25, levV: 3000, tolerancePct: 5 })).toBe('22 MΩ · 250 mW · 3 kV');
+    expect(ratingSummary('capacitor', { ratedVoltageV: 2000 })).toBe('2 kV');
+    expect(ratingSummary('pcb', {})).toBe('');
   });
 });

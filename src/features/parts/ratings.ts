@@ -128,3 +128,13 @@ export function ratingsFromTexts(
   if (issues.length) return { ok: false, issues };
   return parseRatings(category, raw);
 }
+
+/** The headline ratings of a part in one line ("4.7 kΩ · 250 mW · 200 V"), for tables and pickers. */
+export function ratingSummary(category: PartCategory | string, ratings: Record<string, unknown>): string {
+  return ratingFieldsFor(category)
+    .filter((def) => def.kind === 'quantity' || def.kind === 'dielectric')
+    .filter((def) => ratings[def.key] !== undefined && ratings[def.key] !== null)
+    .slice(0, 3)
+    .map((def) => formatRating(def, ratings[def.key]))
+    .join(' · ');
+}

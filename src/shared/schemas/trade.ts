@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { MINOR_UNITS } from '../../../server/costing/minor-units';
+import { MINOR_UNITS } from '../minor-units';
 
 /** Incoterms 2020 (ICC), the eleven three-letter rules. */
 export const incoterms = ['EXW', 'FCA', 'FAS', 'FOB', 'CFR', 'CPT', 'CIF', 'CIP', 'DAP', 'DPU', 'DDP'] as const;

@@ -1,4 +1,4 @@
-import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '../../../shared/permissions';
 import { PageHeader } from '../../../components/ui/page-header';
 import { meQueryOptions } from '../../../features/auth/api';
@@ -7,6 +7,9 @@ import { invitesQueryOptions, membersQueryOptions } from '../../../features/memb
 import { InviteForm } from '../../../features/members/components/invite-form';
 import { MembersTable } from '../../../features/members/components/members-table';
 import { PendingInvites } from '../../../features/members/components/pending-invites';
+import { billingQueryOptions } from '../../../features/billing/api';
+import { limitState } from '../../../features/billing/limits';
+import { LimitBanner } from '../../../features/billing/components/limit-banner';
 
 export const membersLoader = (queryClient: QueryClient) => async () => {
   const session = await queryClient.ensureQueryData(meQueryOptions());
@@ -20,6 +23,8 @@ export const membersLoader = (queryClient: QueryClient) => async () => {
 
 function OwnerInvites() {
   const { data: invites } = useSuspenseQuery(invitesQueryOptions());
+  const billing = useQuery(billingQueryOptions());
+  const limit = billing.data ? limitState(billing.data, 'members') : null;
   return (
     <section aria-labelledby="invites-title" className="mt-10 flex flex-col gap-4">
       <div>
@@ -30,7 +35,7 @@ function OwnerInvites() {
           The invitation goes by e-mail with a link that signs them into this workspace with the role you choose.
         </p>
       </div>
-      <InviteForm />
+      <InviteForm blockedReason={limit?.reason ?? null} />
       <h3 className="mt-4 text-base font-semibold">Pending invites</h3>
       <PendingInvites invites={invites} />
     </section>
@@ -48,6 +53,7 @@ export function MembersRoute() {
         title="Members"
         description={`Everyone in ${session.workspace.name} and the role each holds here.`}
       />
+      <LimitBanner feature="members" role={session.role} />
       <MembersTable
         members={members}
         currentUserId={session.user.id}

@@ -10,7 +10,8 @@ import { TextField } from '../../../components/ui/text-field';
 import { useSendInvite } from '../hooks';
 import { roleOptions } from './role-options';
 
-export function InviteForm() {
+/** `blockedReason`: why the plan refuses another invitation now (the button is disabled and says why). */
+export function InviteForm({ blockedReason = null }: { blockedReason?: string | null } = {}) {
   const sendInvite = useSendInvite();
   const [formError, setFormError] = useState<string | null>(null);
   const [sentTo, setSentTo] = useState<string | null>(null);
@@ -48,10 +49,21 @@ export function InviteForm() {
           {...register('email')}
         />
         <SelectField label="Invite as" options={roleOptions} error={errors.role?.message} {...register('role')} />
-        <Button type="submit" pending={sendInvite.isPending} className="mt-6">
+        <Button
+          type="submit"
+          pending={sendInvite.isPending}
+          disabled={Boolean(blockedReason)}
+          aria-describedby={blockedReason ? 'invite-blocked' : undefined}
+          className="mt-6"
+        >
           Send invite
         </Button>
       </div>
+      {blockedReason ? (
+        <p id="invite-blocked" className="text-sm text-muted">
+          {blockedReason}
+        </p>
+      ) : null}
     </form>
   );
 }

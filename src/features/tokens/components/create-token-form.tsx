@@ -12,7 +12,8 @@ import { useCreateToken } from '../hooks';
 
 type TokenFields = z.infer<typeof tokenBody>;
 
-export function CreateTokenForm({ onCreated }: { onCreated: (token: NewApiToken) => void }) {
+/** `blockedReason`: why the plan refuses tokens (the button is disabled and says why). */
+export function CreateTokenForm({ onCreated, blockedReason = null }: { onCreated: (token: NewApiToken) => void; blockedReason?: string | null }) {
   const createToken = useCreateToken();
   const [formError, setFormError] = useState<string | null>(null);
   const {
@@ -46,10 +47,21 @@ export function CreateTokenForm({ onCreated }: { onCreated: (token: NewApiToken)
           error={errors.name?.message}
           {...register('name')}
         />
-        <Button type="submit" pending={createToken.isPending} className="mt-6">
+        <Button
+          type="submit"
+          pending={createToken.isPending}
+          disabled={Boolean(blockedReason)}
+          aria-describedby={blockedReason ? 'create-token-blocked' : undefined}
+          className="mt-6"
+        >
           Create token
         </Button>
       </div>
+      {blockedReason ? (
+        <p id="create-token-blocked" className="text-sm text-muted">
+          {blockedReason}
+        </p>
+      ) : null}
     </form>
   );
 }

@@ -1,0 +1,171 @@
+import { Suspense, useCallback, useState, type ReactNode } from 'react';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { can } from '../../../shared/permissions';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
+import { Dialog } from '../../../components/ui/dialog';
+import { describeError } from '../../../components/ui/error-state';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { PageHeader } from '../../../components/ui/page-header';
+import { useSession } from '../../../features/auth/session-context';
+import { partFilesQueryOptions, partLabel, partQueryOptions } from '../../../features/parts/api';
+import { Datasheets } from '../../../features/parts/components/datasheets';
+import { PartForm } from '../../../features/parts/components/part-form';
+import { PartFields, PartRatings } from '../../../features/parts/components/part-summary';
+import { useDeletePart } from '../../../features/parts/hooks';
+import { categoryLabels } from '../../../features/parts/part-form';
+import { quotesQueryOptions, type Quote } from '../../../features/quotes/api';
+import { QuoteEditor } from '../../../features/quotes/components/quote-editor';
+import { QuotesTable } from '../../../features/quotes/components/quotes-table';
+import { suppliersQueryOptions } from '../../../features/suppliers/api';
+
+export const partDetailLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const id = params.id ?? '';
+    await Promise.all([
+      queryClient.ensureQueryData(partQueryOptions(id)),
+      queryClient.ensureQueryData(partFilesQueryOptions(id)),
+      queryClient.ensureQueryData(quotesQueryOptions({ partId: id })),
+      queryClient.ensureQueryData(suppliersQueryOptions()),
+    ]);
+    return null;
+  };
+
+function Section({ id, title, action, children }: { id: string; title: string; action?: ReactNode; children: ReactNode }) {
+  return (
+    <section aria-labelledby={id} className="flex flex-col gap-3">
+      <div className="flex items-center justify-between gap-3">
+        <h2 id={id} className="text-lg font-semibold">
+          {title}
+        </h2>
+        {action}
+      </div>
+      {children}
+    </section>
+  );
+}
+
+export function PartDetailRoute() {
+  const { id = '' } = useParams();
+  const session = useSession();
+  const navigate = useNavigate();
+  const { data: part } = useSuspenseQuery(partQueryOptions(id));
+  const { data: quotes } = useSuspenseQuery(quotesQueryOptions({ partId: id }));
+  const { data: suppliers } = useSuspenseQuery(suppliersQueryOptions());
+  const [editing, setEditing] = useState(false);
+  const [deleting, setDeleting] = useState(false);
+  const [quoteEditing, setQuoteEditing] = useState<Quote | 'new' | null>(null);
+  const deletePart = useDeletePart();
+  const canWriteParts = can(session.role, 'parts.write');
+  const canWriteQuotes = can(session.role, 'quotes.write');
+  const onEditQuote = useCallback((quote: Quote) => setQuoteEditing(quote), []);
+
+  return (
+    <>
+      <PageHeader
+        title={part.internalPn}
+        description={[part.mpn, part.manufacturer, categoryLabels[part.category]].filter(Boolean).join(' · ')}
+        actions={
+          <>
+            <Link to={`/quote-board?part=${encodeURIComponent(part.id)}`} className={buttonClasses('secondary')}>
+              Open quote board
+            </Link>
+            {canWriteParts ? (
+              <>
+                <Button variant="secondary" onClick={() => setEditing(true)}>
+                  Edit part
+                </Button>
+                <Button variant="danger" onClick={() => setDeleting(true)}>
+                  Delete part
+                </Button>
+              </>
+            ) : null}
+          </>
+        }
+      />
+      <p className="-mt-3 mb-6 text-sm">
+        <Link to="/parts" className="text-muted underline-offset-2 hover:text-ink hover:underline">
+          ← All parts
+        </Link>
+      </p>
+
+      <div className="flex flex-col gap-10">
+        <Section id="part-details" title="Details">
+          <PartFields part={part} />
+        </Section>
+
+        <Section id="part-ratings" title="Ratings">
+          <PartRatings part={part} />
+        </Section>
+
+        <Section id="part-datasheets" title="Datasheets">
+          <Suspense fallback={<LoadingState label="Loading datasheets…" />}>
+            <Datasheets partId={part.id} canWrite={canWriteParts} />
+          </Suspense>
+        </Section>
+
+        <Section
+          id="part-quotes"
+          title="Quotes"
+          action={
+            canWriteQuotes ? (
+              <Button onClick={() => setQuoteEditing('new')} disabled={suppliers.length === 0} title={suppliers.length === 0 ? 'Add a supplier first' : undefined}>
+                Add quote
+              </Button>
+            ) : null
+          }
+        >
+          {canWriteQuotes && suppliers.length === 0 ? (
+            <p className="text-sm text-muted">
+              A quote comes from a supplier: <Link to="/suppliers" className="text-copper-dark underline">add a supplier</Link> first.
+            </p>
+          ) : null}
+          <QuotesTable quotes={quotes} show="supplier" canWrite={canWriteQuotes} onEdit={onEditQuote} empty="No quotes for this part yet." />
+        </Section>
+
+        <Section id="part-boms" title="BOMs that use this part">
+          <p className="text-sm text-muted">BOMs arrive with the BOM editor; from then on every BOM that uses this part is listed here.</p>
+        </Section>
+      </div>
+
+      <Dialog open={editing} title={`Edit ${part.internalPn}`} size="lg" onClose={() => setEditing(false)}>
+        <PartForm part={part} onDone={() => setEditing(false)} onCancel={() => setEditing(false)} />
+      </Dialog>
+
+      <Dialog
+        open={quoteEditing !== null}
+        title={quoteEditing === 'new' ? `Add quote for ${part.internalPn}` : `Edit quote for ${part.internalPn}`}
+        size="lg"
+        onClose={() => setQuoteEditing(null)}
+      >
+        {quoteEditing !== null ? (
+          <QuoteEditor
+            quote={quoteEditing === 'new' ? undefined : quoteEditing}
+            partId={part.id}
+            partLabel={partLabel(part)}
+            suppliers={suppliers}
+            onDone={() => setQuoteEditing(null)}
+            onCancel={() => setQuoteEditing(null)}
+          />
+        ) : null}
+      </Dialog>
+
+      <ConfirmDialog
+        open={deleting}
+        title={`Delete ${part.internalPn}?`}
+        confirmLabel="Delete part and its quotes"
+        pending={deletePart.isPending}
+        error={deletePart.isError ? describeError(deletePart.error) : null}
+        onCancel={() => {
+          setDeleting(false);
+          deletePart.reset();
+        }}
+        onConfirm={() => deletePart.mutate(part.id, { onSuccess: () => navigate('/parts', { replace: true }) })}
+      >
+        Its quotes and datasheets are deleted with it.
+      </ConfirmDialog>
+    </>
+  );
+}

@@ -7,6 +7,19 @@ import { getProfile } from '../profiles/repository';
 import type { BomRow, LineRow } from './repository';
 import { linesOf } from './repository';
 
+/**
+ * Runs reads side by side on a pool; inside a transaction (one connection) one after the
+ * other, since a connection takes one query at a time.
+ */
+async function inParallel<T extends readonly (() => Promise<unknown>)[]>(db: DbOrTrx, fns: T): Promise<{ [K in keyof T]: Awaited<ReturnType<T[K]>> }> {
+  if ((db as { isTransaction?: boolean }).isTransaction) {
+    const out: unknown[] = [];
+    for (const fn of fns) out.push(await fn());
+    return out as { [K in keyof T]: Awaited<ReturnType<T[K]>> };
+  }
+  return Promise.all(fns.map((fn) => fn())) as Promise<{ [K in keyof T]: Awaited<ReturnType<T[K]>> }>;
+}
+
 export interface CostingData {
   bom: BomRow;
   lines: LineRow[];
@@ -23,15 +36,15 @@ export interface CostingData {
 export async function loadCostingData(db: DbOrTrx, workspaceId: string, bom: BomRow, date: string): Promise<CostingData> {
   const lines = await linesOf(db, workspaceId, bom.id);
   const partIds = [...new Set(lines.map((l) => l.partId).filter((x): x is string => Boolean(x)))];
-  const [parts, quotes, profile, fxRates, pivot] = await Promise.all([
-    partIds.length
+  const [parts, quotes, profile, fxRates, pivot] = await inParallel(db, [
+    () => partIds.length
       ? (scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [partIds]).select('id', 'internalPn', 'mpn', 'manufacturer', 'description', 'category', 'mount', 'pins', 'hsCode', 'unitWeightG', 'ratings') as Promise<CostingData['parts']>)
       : Promise.resolve([] as CostingData['parts']),
-    partIds.length ? loadQuotes(db, workspaceId, { partIds }) : Promise.resolve([]),
-    bom.profileId ? getProfile(db, workspaceId, bom.profileId) : Promise.resolve(undefined),
-    ratesAsOf(db, workspaceId, date),
-    pivotOf(db, workspaceId),
-  ]);
+    () => partIds.length ? loadQuotes(db, workspaceId, { partIds }) : Promise.resolve([]),
+    () => bom.profileId ? getProfile(db, workspaceId, bom.profileId) : Promise.resolve(undefined),
+    () => ratesAsOf(db, workspaceId, date),
+    () => pivotOf(db, workspaceId),
+  ] as const);
   const supplierIds = [...new Set(quotes.map((q) => q.supplierId))];
   const suppliers = supplierIds.length
     ? ((await scoped(db, 'suppliers', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [supplierIds]).select('id', 'active', 'name')) as { id: string; active: boolean; name: string }[])

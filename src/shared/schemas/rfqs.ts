@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { idParam } from './common';
-import { isoDate, unitPrice } from './decimal';
+import { isoDate } from './decimal';
 import { currency, incoterm } from './trade';
 import { priceBreaks } from './quotes';
 

@@ -11,6 +11,9 @@ import { migrateLatest } from '../server/db/migrate';
 import { costOf, curveOf, defaultCurve } from '../server/boms/cost';
 import { getBom } from '../server/boms/repository';
 import type { Deps } from '../server/deps';
+import { Writable } from 'node:stream';
+import { loadExportData } from '../server/export/load';
+import { writeCostedBom } from '../server/export/workbook';
 
 const sizes = (process.env.BENCH_SIZES ?? '100,1000,10000').split(',').map(Number);
 const runs = Number(process.env.BENCH_RUNS ?? 7);
@@ -103,6 +106,20 @@ async function main() {
         costRollMedianMs: Math.round(r), bareSelectMedianMs: Math.round(f), ratio: Number((r / f).toFixed(2)),
         curve12MedianMs: Math.round(c), curveOverOneRoll: Number((c / r).toFixed(2)), peakRssMb: Math.round(peakRss / 1024 / 1024),
       }));
+    }
+    // The costed workbook of a 5,000-line BOM (issue: the export's figure lives here, not in a timed test).
+    const exportLines = Number(process.env.BENCH_EXPORT_LINES ?? 5000);
+    if (exportLines > 0) {
+      const { workspaceId, bomId } = await generate(db, exportLines);
+      let bytes = 0;
+      const sink = new Writable({ write: (chunk: Buffer, _enc, done) => ((bytes += chunk.length), done()) });
+      const t0 = performance.now();
+      const data = await loadExportData(db, workspaceId, bomId);
+      const loaded = performance.now();
+      await writeCostedBom(sink, data);
+      const done = performance.now();
+      sample();
+      console.log(JSON.stringify({ export: 'costed BOM workbook', lines: exportLines, loadMs: Math.round(loaded - t0), writeMs: Math.round(done - loaded), totalMs: Math.round(done - t0), bytes, peakRssMb: Math.round(peakRss / 1024 / 1024) }));
     }
   } finally {
     clearInterval(sampler);

@@ -84,4 +84,22 @@ export const partRoutes: RouteDef[] = [
         return undefined;
       }),
   }),
+  route({
+    method: 'get', path: '/api/parts/:id/boms', access: 'boms.read', tag: 'Parts',
+    summary: 'The BOM revisions that use a part, with the lines’ designators and quantity per unit.', params: idParams,
+    handler: async ({ auth, params, deps }) => {
+      await getOrNotFound(deps.db, 'parts', auth.workspaceId, params.id, 'part');
+      const rows = (await scoped(deps.db, 'bom_lines', auth.workspaceId)
+        .andWhere('bom_lines.partId', params.id)
+        .join('boms', function () {
+          this.on('boms.id', 'bom_lines.bomId').andOn('boms.workspaceId', 'bom_lines.workspaceId');
+        })
+        .groupBy('boms.id', 'boms.name', 'boms.revision', 'boms.state')
+        .orderBy([{ column: 'boms.name' }, { column: 'boms.revision', order: 'desc' }])
+        .select('boms.id', 'boms.name', 'boms.revision', 'boms.state', deps.db.raw(`string_agg(nullif(bom_lines.ref_des, ''), ', ') AS ref_des`), deps.db.raw('sum(bom_lines.qty_per_unit)::text AS qty_per_unit'))) as {
+        id: string; name: string; revision: number; state: string; refDes: string | null; qtyPerUnit: string;
+      }[];
+      return { items: rows.map((r) => ({ ...r, qtyPerUnit: r.qtyPerUnit.replace(/\.?0+$/, '') })), nextCursor: null };
+    },
+  }),
 ];

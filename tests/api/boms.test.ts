@@ -39,6 +39,8 @@ describe('BOMs, lines and the cost roll', () => {
     await d.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R1-R4', partId: partA.id, qtyPerUnit: '4' }).expect(201);
     await d.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'C1', partId: partB.id, qtyPerUnit: 1 }).expect(201);
     await d.post(`/api/boms/${bom.id}/lines`).send({ kind: 'tooling', note: 'Housing mould', oneTimeCost: '300', currency: 'USD', qtyPerUnit: '1' }).expect(201);
+    const uses = await ws.agents.viewer.get(`/api/parts/${partA.id}/boms`).expect(200);
+    expect(uses.body.items.find((u: { id: string }) => u.id === bom.id)).toMatchObject({ refDes: 'R1-R4', qtyPerUnit: '4' });
     const cost = await d.get(`/api/boms/${bom.id}/cost`).query({ qty: 1000 }).expect(200);
     expect(Object.keys(cost.body)).toEqual(expect.arrayContaining(['qty', 'date', 'currency', 'lines', 'totals', 'byCategory', 'bySupplier', 'warnings', 'leftOut']));
     for (const key of ['lineId', 'refDes', 'partId', 'quoteId', 'supplierId', 'requiredQty', 'orderQty', 'unitPrice', 'unitPriceCurrency', 'goodsValue', 'excessValue', 'origin', 'freight', 'insurance', 'duty', 'fees', 'destination', 'assembly', 'landed', 'landedPerUnit', 'warnings']) {

@@ -29,6 +29,7 @@ export const partKeys = {
   details: () => [...partKeys.all, 'detail'] as const,
   detail: (id: string) => [...partKeys.details(), id] as const,
   files: (id: string) => [...partKeys.detail(id), 'files'] as const,
+  boms: (id: string) => [...partKeys.detail(id), 'boms'] as const,
 };
 
 // Large pages: a library of 10,000 parts arrives in two requests, not twenty.
@@ -60,6 +61,21 @@ export const partFilesQueryOptions = (id: string) =>
   queryOptions({
     queryKey: partKeys.files(id),
     queryFn: ({ signal }) => getAllPages<PartFile>(`/api/parts/${encodeURIComponent(id)}/files`, signal),
+  });
+
+export interface PartBomUse {
+  id: string;
+  name: string;
+  revision: number;
+  state: string;
+  refDes: string | null;
+  qtyPerUnit: string;
+}
+
+export const partBomsQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: partKeys.boms(id),
+    queryFn: ({ signal }) => getAllPages<PartBomUse>(`/api/parts/${encodeURIComponent(id)}/boms`, signal),
   });
 
 /** How a part is named in a list or a picker: our number, then the maker's. */

@@ -9,7 +9,7 @@ import { describeError } from '../../../components/ui/error-state';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { PageHeader } from '../../../components/ui/page-header';
 import { useSession } from '../../../features/auth/session-context';
-import { partFilesQueryOptions, partLabel, partQueryOptions } from '../../../features/parts/api';
+import { partBomsQueryOptions, partFilesQueryOptions, partLabel, partQueryOptions } from '../../../features/parts/api';
 import { Datasheets } from '../../../features/parts/components/datasheets';
 import { PartForm } from '../../../features/parts/components/part-form';
 import { PartFields, PartRatings } from '../../../features/parts/components/part-summary';
@@ -126,7 +126,9 @@ export function PartDetailRoute() {
         </Section>
 
         <Section id="part-boms" title="BOMs that use this part">
-          <p className="text-sm text-muted">BOMs arrive with the BOM editor; from then on every BOM that uses this part is listed here.</p>
+          <Suspense fallback={<LoadingState label="Loading the BOMs" />}>
+            <PartBoms partId={part.id} />
+          </Suspense>
         </Section>
       </div>
 
@@ -167,5 +169,25 @@ export function PartDetailRoute() {
         Its quotes and datasheets are deleted with it.
       </ConfirmDialog>
     </>
+  );
+}
+
+function PartBoms({ partId }: { partId: string }) {
+  const { data } = useSuspenseQuery(partBomsQueryOptions(partId));
+  if (!data.length) return <p className="text-sm text-muted">No BOM uses this part yet.</p>;
+  return (
+    <ul aria-label="BOMs that use this part" className="divide-y divide-rule rounded-lg border border-rule bg-surface text-sm">
+      {data.map((b) => (
+        <li key={b.id} className="flex items-center justify-between gap-3 px-3 py-2">
+          <Link to={`/boms/${b.id}/lines`} className="font-medium text-copper-dark underline-offset-2 hover:underline">
+            {b.name} · rev {b.revision}
+          </Link>
+          <span className="text-muted">
+            {b.refDes ? `${b.refDes} · ` : ''}
+            <span className="tabular-nums">{b.qtyPerUnit}</span> per unit · {b.state.replace('_', ' ')}
+          </span>
+        </li>
+      ))}
+    </ul>
   );
 }

@@ -114,7 +114,12 @@ export async function changeState(
 
 /** The next revision: a draft copy of the BOM and its lines, numbered after the family's latest. */
 export async function newRevision(deps: Deps, auth: Auth, bomId: string) {
-  return deps.db.transaction(async (trx) => {
+  return deps.db.transaction((trx) => newRevisionIn(trx, auth, bomId));
+}
+
+/** The same, inside a transaction the caller owns (a swap on a released BOM). */
+export async function newRevisionIn(trx: Trx, auth: Auth, bomId: string) {
+  {
     const bom = await getBom(trx, auth.workspaceId, bomId);
     // Serialise revision numbering within the family.
     await trx.raw('SELECT pg_advisory_xact_lock(?)', [Number(bom.familyId)]);
@@ -139,7 +144,7 @@ export async function newRevision(deps: Deps, auth: Auth, bomId: string) {
     }
     await audit(trx, { workspaceId: auth.workspaceId, userId: auth.userId, action: 'revision', entity: 'bom', entityId: row.id, changes: { from: bomId, revision: row.revision } });
     return bomView(row);
-  });
+  }
 }
 
 export { lineView };

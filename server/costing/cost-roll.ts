@@ -1,10 +1,20 @@
 import { dec, Dec, decOr, moneyText, ONE, pctToFraction, perUnitText, ZERO } from './decimal';
 import { CostingInputError } from './errors';
 import type { DutyMatch } from './duty';
-import { createFxIndex, type FxIndex, type FxLookup } from './fx';
+import { createFxIndex, type FxFound, type FxIndex, type FxLookup } from './fx';
 import { needsAdder } from './incoterms';
 import { lineAdders, type LineAdders } from './landed';
-import { requiredQty, toCount } from './order-quantity';
+import {
+  floatsApart,
+  orderSpend,
+  orderSpendFloat,
+  rankingFloat,
+  requiredQty,
+  spendAt,
+  toCount,
+  type FloatOrder,
+  type OrderSpend,
+} from './order-quantity';
 import { prepareProfile, type PreparedProfile } from './profile';
 import {
   compareQuotes,
@@ -45,6 +55,39 @@ interface PreparedLine {
   attrition: Dec | null;
   unitCost: Dec | null;
   oneTimeCost: Dec | null;
+  /** Part lines whose part is in the input: what ranking its quotes needs at any quantity. */
+  rank?: LineRank;
+  /** The part's unit weight, parsed on first use (a bad value fails where it is read). */
+  unitWeight?: Dec;
+  /** Assembly per unit and the missing-pins flag, worked out on first use. */
+  assembly?: { perUnit: Dec; missingPins: boolean };
+}
+
+/** An eligible quote with a rate, and its board landed cost per unit of quoted goods value. */
+interface Candidate {
+  slot: QuoteSlot;
+  fx: FxFound;
+  multiplier: Dec;
+  /** `multiplier` as a float for ranking (NaN when a float cannot stand in). */
+  multiplierF: number;
+}
+
+/** Everything about a part line that does not depend on the build quantity. */
+interface LineRank {
+  part: Part;
+  duty: DutyMatch;
+  /** Attrition as a fraction: the line's own, else the profile's for the category, else 0. */
+  attrition: Dec;
+  /**
+   * R = ceil(q × N × (1 + a)) as integers: q × (1 + a) = reqNum / reqDen exactly, or
+   * reqNum = 0 when the decimals are too long for that (then R is computed in decimal.js).
+   */
+  reqNum: number;
+  reqDen: number;
+  /** Eligible quotes with a rate to the reporting currency, in input order. */
+  candidates: Candidate[];
+  /** The first eligible quote without a rate, for the `missing_fx` detail. */
+  fxMissing?: string;
 }
 
 /** A prepared quote with its eligibility on the costing date, FX aside (fixed for the roll). */
@@ -71,6 +114,8 @@ export interface PreparedCostRoll {
   quotesByPart: ReadonlyMap<string, QuoteSlot[]>;
   quotesById: ReadonlyMap<string, QuoteSlot>;
   factors: LandedFactors;
+  /** Whether per-shipment freight is shared by weight (then freight-carrying lines need one). */
+  byWeight: boolean;
   amortisationQty: Dec | null;
   targetUnitCost: Dec | null;
   /** freightPerShipment × shipments and feesPerShipment × shipments, in the reporting currency. */
@@ -185,6 +230,33 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
     return r;
   };
 
+  const factors = new LandedFactors(profile);
+  const partRanks = new Map<string, Pick<LineRank, 'part' | 'duty' | 'candidates' | 'fxMissing'>>();
+  for (const pl of lines) {
+    const part = pl.line.kind === 'part' && pl.line.partId ? parts.get(pl.line.partId) : undefined;
+    if (!part) continue;
+    let shared = partRanks.get(part.id);
+    if (!shared) {
+      const duty = profile.duty.match(part.hsCode);
+      const candidates: Candidate[] = [];
+      let fxMissing: string | undefined;
+      for (const slot of quotesByPart.get(part.id) ?? []) {
+        if (slot.reasons.length > 0) continue;
+        const r = toReporting(slot.quote.currency);
+        if (!r.ok) {
+          fxMissing ??= fxDetail(r.from, r.to, date);
+          continue;
+        }
+        const multiplier = factors.multiplier(slot.incoterm, duty, r);
+        candidates.push({ slot, fx: r, multiplier, multiplierF: rankingFloat(multiplier) });
+      }
+      partRanks.set(part.id, (shared = { part, duty, candidates, fxMissing }));
+    }
+    const attrition = pl.attrition ?? profile.attrition.get(part.category) ?? ZERO;
+    const [reqNum, reqDen] = exactRatio(pl.qtyPerUnit, ONE.plus(attrition));
+    pl.rank = { ...shared, attrition, reqNum, reqDen };
+  }
+
   return {
     date,
     currency,
@@ -195,7 +267,8 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
     parts,
     quotesByPart,
     quotesById,
-    factors: new LandedFactors(profile),
+    factors,
+    byWeight: profile.freightBasis === 'weight' && !profile.freightPerShipment.times(profile.shipments).isZero(),
     amortisationQty,
     targetUnitCost: optionalDec(bom.targetUnitCost, 'bom.targetUnitCost'),
     freightPool,
@@ -215,7 +288,7 @@ interface Work {
   warnings: LineWarning[];
   category: string;
   required?: number;
-  chosen?: PricedQuote;
+  chosen?: Chosen;
   /** The chosen quote's goods value G in the reporting currency. */
   goods?: Dec;
   duty?: DutyMatch;
@@ -260,35 +333,138 @@ function costCostLine(p: PreparedCostRoll, w: Work): Work {
   return w;
 }
 
-function weightNeeded(p: PreparedCostRoll): boolean {
-  return p.profile.freightBasis === 'weight' && !p.profile.freightPerShipment.times(p.profile.shipments).isZero();
+/** A decimal's digits as an integer and its decimal places, or null when either is too long. */
+function digits(value: Dec): [number, number] | null {
+  const dp = value.decimalPlaces();
+  if (dp > 15) return null;
+  const n = Number(value.toFixed(dp).replace('.', ''));
+  return Number.isSafeInteger(n) && n > 0 ? [n, dp] : null;
 }
 
-function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
-  const { pl } = w;
-  const part = pl.line.partId ? p.parts.get(pl.line.partId) : undefined;
-  if (!part) return leaveOut(w, 'no_part', pl.line.partId ?? undefined);
-  w.category = part.category;
-  const attrition = pl.attrition ?? p.profile.attrition.get(part.category) ?? ZERO;
-  const required = toCount(requiredQty(pl.qtyPerUnit, buildQty, attrition), `lines.${pl.index}.requiredQty`);
-  w.required = required;
-  const duty = p.profile.duty.match(part.hsCode);
-  w.duty = duty;
+/** a × b as an exact fraction num / 10^k of safe integers, or [0, 1] when it is not one. */
+function exactRatio(a: Dec, b: Dec): [number, number] {
+  const x = digits(a);
+  const y = digits(b);
+  if (!x || !y || x[1] + y[1] > 15) return [0, 1];
+  const num = x[0] * y[0];
+  return Number.isSafeInteger(num) ? [num, 10 ** (x[1] + y[1])] : [0, 1];
+}
 
-  // The cheapest eligible quote as the quote board ranks it.
+/**
+ * R = ceil(q × N × (1 + a)). When every digit fits a safe integer, decimal.js computes it
+ * exactly too, so integer arithmetic gives the same count; otherwise decimal.js does.
+ */
+function lineRequired(pl: PreparedLine, rank: LineRank, buildQty: number, N: Dec): number {
+  const p = rank.reqNum * buildQty;
+  if (rank.reqNum > 0 && Number.isSafeInteger(p)) {
+    const rest = p % rank.reqDen;
+    return (p - rest) / rank.reqDen + (rest === 0 ? 0 : 1);
+  }
+  return toCount(requiredQty(pl.qtyPerUnit, N, rank.attrition), `lines.${pl.index}.requiredQty`);
+}
+
+/** The chosen quote for a line: its order and the rate to the reporting currency. */
+interface Chosen {
+  pq: PreparedQuote;
+  order: OrderSpend;
+  fx: FxFound;
+}
+
+// Scratch for ranking one line's quotes; a roll is synchronous, so one set serves all lines.
+const scratchOrders: FloatOrder[] = [];
+const scratchLanded: number[] = [];
+/** Per candidate: DROP (safely above the minimum), FLOAT (kept, its float order is exact), EXACT (kept, floats failed). */
+const scratchState: number[] = [];
+const DROP = 0;
+const FLOAT = 1;
+const EXACT = 2;
+
+/**
+ * The cheapest candidate as the quote board ranks it (lowest board landed cost, then
+ * `compareQuotes`' ties). Ranked in floats; every candidate the floats cannot safely put
+ * above the float minimum (ties, near-ties, values a float cannot hold) is priced in
+ * decimal.js and compared exactly, so the choice is the exact one. When the floats settle
+ * it, only the winner's order is computed in decimal.js.
+ */
+function cheapest(cands: Candidate[], required: number, duty: DutyMatch, factors: LandedFactors): Chosen | undefined {
+  const n = cands.length;
+  if (n === 0) return undefined;
+  while (scratchOrders.length < n) scratchOrders.push({ qty: 0, tier: 0, spend: 0 });
+  let min = Number.POSITIVE_INFINITY;
+  let minK = -1;
+  for (let k = 0; k < n; k++) {
+    const c = cands[k];
+    const o = scratchOrders[k];
+    const landed = orderSpendFloat(c.slot.terms, required, o) ? o.spend * c.multiplierF : Number.NaN;
+    scratchLanded[k] = landed;
+    scratchState[k] = Number.isFinite(landed) ? FLOAT : EXACT;
+    if (scratchState[k] === FLOAT && (minK < 0 || landed < min)) {
+      min = landed;
+      minK = k;
+    }
+  }
+  let kept = 0;
+  let last = -1;
+  for (let k = 0; k < n; k++) {
+    // Only a float-safe candidate clearly above a float-safe minimum can be dropped.
+    if (minK >= 0 && k !== minK && scratchState[k] === FLOAT && floatsApart(scratchLanded[k], min)) scratchState[k] = DROP;
+    else {
+      kept++;
+      last = k;
+    }
+  }
+  if (kept === 1 && scratchState[last] === FLOAT) {
+    const c = cands[last];
+    const o = scratchOrders[last];
+    return { pq: c.slot, order: spendAt(c.slot.terms, o.tier, o.qty), fx: c.fx };
+  }
+  let best: PricedQuote | undefined;
+  for (let k = 0; k < n; k++) {
+    if (scratchState[k] === DROP) continue;
+    const c = cands[k];
+    const o = scratchOrders[k];
+    const order = scratchState[k] === FLOAT ? spendAt(c.slot.terms, o.tier, o.qty) : orderSpend(c.slot.terms, required);
+    const priced = priceQuote(c.slot, required, c.fx, duty, factors, order);
+    if (!best || compareQuotes(priced, best) < 0) best = priced;
+  }
+  return best;
+}
+
+/** The reference ranking: every eligible quote priced and compared in decimal.js (for tests). */
+function cheapestExact(p: PreparedCostRoll, part: Part, required: number, duty: DutyMatch): { best?: PricedQuote; fxMissing?: string } {
   let best: PricedQuote | undefined;
   let fxMissing: string | undefined;
-  const slots = p.quotesByPart.get(part.id) ?? [];
-  const fxFor = p.toReporting;
-  for (const slot of slots) {
+  for (const slot of p.quotesByPart.get(part.id) ?? []) {
     if (slot.reasons.length > 0) continue;
-    const rate = fxFor(slot.quote.currency);
+    const rate = p.toReporting(slot.quote.currency);
     if (!rate.ok) {
       fxMissing ??= fxDetail(rate.from, rate.to, p.date);
       continue;
     }
     const priced = priceQuote(slot, required, rate, duty, p.factors);
     if (!best || compareQuotes(priced, best) < 0) best = priced;
+  }
+  return { best, fxMissing };
+}
+
+function costPartLine(p: PreparedCostRoll, w: Work, buildQty: number, N: Dec, reference: boolean): Work {
+  const { pl } = w;
+  const rank = pl.rank;
+  if (!rank) return leaveOut(w, 'no_part', pl.line.partId ?? undefined);
+  const { part, duty } = rank;
+  w.category = part.category;
+  const required = reference
+    ? toCount(requiredQty(pl.qtyPerUnit, N, rank.attrition), `lines.${pl.index}.requiredQty`)
+    : lineRequired(pl, rank, buildQty, N);
+  w.required = required;
+  w.duty = duty;
+
+  let best: Chosen | undefined;
+  let fxMissing: string | undefined;
+  if (reference) ({ best, fxMissing } = cheapestExact(p, part, required, duty));
+  else {
+    best = cheapest(rank.candidates, required, duty, p.factors);
+    fxMissing = rank.fxMissing;
   }
 
   let chosen = best;
@@ -298,7 +474,7 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
     if (!slot || slot.quote.partId !== part.id) {
       w.warnings.push({ code: 'pinned_not_found', detail: pinnedId });
     } else {
-      const rate = fxFor(slot.quote.currency);
+      const rate = p.toReporting(slot.quote.currency);
       if (!rate.ok) return leaveOut(w, 'missing_fx', fxDetail(rate.from, rate.to, p.date));
       const pinned = priceQuote(slot, required, rate, duty, p.factors);
       for (const r of slot.reasons) {
@@ -306,8 +482,11 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
         if (code) w.warnings.push({ code });
       }
       const noLongerValid = slot.reasons.includes('expired') || slot.reasons.includes('not_yet_valid');
-      if (!noLongerValid && best && best.pq !== slot && best.boardLanded.lt(pinned.boardLanded)) {
-        w.warnings.push({ code: 'pinned_not_cheapest', detail: best.pq.quote.id });
+      if (!noLongerValid && best && best.pq !== slot) {
+        const bestLanded = 'boardLanded' in best
+          ? (best as PricedQuote).boardLanded
+          : priceQuote(best.pq, required, best.fx, duty, p.factors, best.order).boardLanded;
+        if (bestLanded.lt(pinned.boardLanded)) w.warnings.push({ code: 'pinned_not_cheapest', detail: best.pq.quote.id });
       }
       chosen = pinned;
     }
@@ -315,30 +494,33 @@ function costPartLine(p: PreparedCostRoll, w: Work, buildQty: Dec): Work {
 
   if (!chosen) return fxMissing ? leaveOut(w, 'missing_fx', fxMissing) : leaveOut(w, 'no_quote');
   w.chosen = chosen;
-  w.goods = convertedGoods(chosen);
+  w.goods = chosen.fx.route === 'same' ? chosen.order.goodsValue : chosen.order.goodsValue.times(chosen.fx.rate);
   w.fxRows = chosen.fx.rows;
 
-  if (weightNeeded(p) && needsAdder(chosen.pq.incoterm, 'freight')) {
+  if (p.byWeight && needsAdder(chosen.pq.incoterm, 'freight')) {
     if (part.unitWeightG === null || part.unitWeightG === undefined || part.unitWeightG === '') {
       return leaveOut(w, 'missing_weight', part.id);
     }
-    w.weight = dec(part.unitWeightG, `parts.${part.id}.unitWeightG`).times(chosen.order.orderQty);
+    pl.unitWeight ??= dec(part.unitWeightG, `parts.${part.id}.unitWeightG`);
+    w.weight = pl.unitWeight.times(chosen.order.orderQty);
   }
 
   if (p.assemblyRates.ok) {
-    const r = p.assemblyRates;
-    const q = pl.qtyPerUnit;
-    if (part.mount === 'smt') w.assemblyPerUnit = q.times(r.smt);
-    else if (part.mount === 'hand') w.assemblyPerUnit = q.times(r.hand);
-    else if (part.mount === 'tht') {
-      if (part.pins === null || part.pins === undefined) {
-        if (!r.tht.isZero()) w.warnings.push({ code: 'missing_pins', detail: part.id });
-      } else {
-        w.assemblyPerUnit = q.times(dec(part.pins, `parts.${part.id}.pins`)).times(r.tht);
-      }
-    }
+    const a = (pl.assembly ??= lineAssembly(p.assemblyRates, pl.qtyPerUnit, part));
+    w.assemblyPerUnit = a.perUnit;
+    if (a.missingPins) w.warnings.push({ code: 'missing_pins', detail: part.id });
   }
   return w;
+}
+
+function lineAssembly(r: { smt: Dec; tht: Dec; hand: Dec }, q: Dec, part: Part): { perUnit: Dec; missingPins: boolean } {
+  if (part.mount === 'smt') return { perUnit: q.times(r.smt), missingPins: false };
+  if (part.mount === 'hand') return { perUnit: q.times(r.hand), missingPins: false };
+  if (part.mount === 'tht') {
+    if (part.pins === null || part.pins === undefined) return { perUnit: ZERO, missingPins: !r.tht.isZero() };
+    return { perUnit: q.times(dec(part.pins, `parts.${part.id}.pins`)).times(r.tht), missingPins: false };
+  }
+  return { perUnit: ZERO, missingPins: false };
 }
 
 interface Sums {
@@ -431,6 +613,11 @@ function sharePool(
 export interface RollOptions {
   /** Leave out the per-line output (the volume curve needs totals only). */
   lines?: boolean;
+  /**
+   * Price and compare every eligible quote in decimal.js, and R too, instead of ranking in
+   * floats first. Slow; the tests' reference for the float ranking, which must agree with it.
+   */
+  exactRanking?: boolean;
 }
 
 /**
@@ -447,6 +634,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   const amortiseOver = p.amortisationQty ?? N;
   const warnings: RollWarning[] = [...p.staticWarnings];
   const wantLines = options.lines !== false;
+  const reference = options.exactRanking === true;
 
   const work: Work[] = p.lines.map((pl) => {
     const w: Work = {
@@ -463,13 +651,13 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
       w.status = 'dnp';
       return w;
     }
-    return pl.line.kind === 'part' ? costPartLine(p, w, N) : costCostLine(p, w);
+    return pl.line.kind === 'part' ? costPartLine(p, w, buildQty, N, reference) : costCostLine(p, w);
   });
 
   const partLines = work.filter((w) => w.status === 'costed' && w.chosen);
   const freightCarriers = partLines.filter((w) => needsAdder(w.chosen!.pq.incoterm, 'freight'));
   const feeCarriers = partLines.filter((w) => needsAdder(w.chosen!.pq.incoterm, 'fees'));
-  const byWeight = weightNeeded(p);
+  const byWeight = p.byWeight;
   const freightShares = p.freightPool.ok
     ? sharePool(
         p.freightPool.value,

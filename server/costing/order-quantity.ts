@@ -47,6 +47,8 @@ export interface OrderTerms {
   multiple: number;
   /** m' = max(MOQ, smallest break's minQty). */
   effectiveMoq: number;
+  /** Prices as floats for ranking only (NaN where a float cannot stand in); filled on first use. */
+  floats?: number[];
 }
 
 /** The cheapest order for R without the excess figures: what ranking quotes needs. */
@@ -169,6 +171,90 @@ export function orderSpend(terms: OrderTerms, required: number): OrderSpend {
     }
   }
   return { orderQty, unitPrice, goodsValue };
+}
+
+/** The spend of ordering `qty` at break `tier` (as `orderSpend` computes it for its choice). */
+export function spendAt(terms: OrderTerms, tier: number, qty: number): OrderSpend {
+  const unitPrice = priceOf(terms, tier);
+  return { orderQty: qty, unitPrice, goodsValue: unitPrice.times(qty) };
+}
+
+/*
+ * Ranking in floats. Choosing a quote only needs to know which spend or landed cost is
+ * lowest; the amounts themselves are then computed in decimal.js for the chosen quote alone.
+ * A float product of a few exact inputs is within about 1e-15 of the decimal one, so when
+ * two floats differ by more than FLOAT_TIE (relative) the exact values order the same way.
+ * Closer than that, or a value a float cannot hold, and the caller compares exactly.
+ */
+
+/** Relative gap below which two floats are not trusted to order as their exact values do. */
+export const FLOAT_TIE = 1e-9;
+
+/** True when floats a and b are safely apart (false for NaN, infinities, ties and near-ties). */
+export function floatsApart(a: number, b: number): boolean {
+  return Math.abs(a - b) > FLOAT_TIE * Math.max(Math.abs(a), Math.abs(b));
+}
+
+/**
+ * A decimal as a float for ranking, or NaN when the float may not order like it: beyond
+ * 1e±100 (so products of three stay finite and never lose precision to underflow), or a
+ * non-zero value that would read as 0.
+ */
+export function rankingFloat(value: Dec): number {
+  const f = value.toNumber();
+  const a = Math.abs(f);
+  if (a === 0) return value.isZero() ? 0 : Number.NaN;
+  return a >= 1e-100 && a <= 1e100 ? f : Number.NaN;
+}
+
+function floatPrices(terms: OrderTerms): number[] {
+  if (terms.floats) return terms.floats;
+  return (terms.floats = terms.priceTexts.map((text) => {
+    const f = Number(text);
+    if (f === 0) return /[1-9]/.test(text) ? Number.NaN : 0;
+    return f >= 1e-100 && f <= 1e100 ? f : Number.NaN;
+  }));
+}
+
+/** Where `orderSpendFloat` writes its choice (reused: no allocation per quote). */
+export interface FloatOrder {
+  qty: number;
+  tier: number;
+  /** Q × price(Q) as a float. */
+  spend: number;
+}
+
+/**
+ * `orderSpend`'s rule in floats: the same candidates, the same strict "<". Returns false
+ * when two candidates' spends are too close for floats (or a price is not float-safe); the
+ * caller then uses `orderSpend`. When it returns true, `out` names the order `orderSpend`
+ * would choose.
+ */
+export function orderSpendFloat(terms: OrderTerms, required: number, out: FloatOrder): boolean {
+  const prices = floatPrices(terms);
+  const base = ceilToMultipleCount(Math.max(required, terms.effectiveMoq), terms.multiple);
+  if (!Number.isSafeInteger(base)) return false;
+  const { minQtys } = terms;
+  const i = tierIndex(minQtys, base);
+  let qty = base;
+  let tier = i;
+  let spend = prices[i] * base;
+  if (Number.isNaN(spend)) return false;
+  for (let j = i + 1; j < minQtys.length; j++) {
+    const q = ceilToMultipleCount(minQtys[j], terms.multiple);
+    const t = tierIndex(minQtys, q);
+    const s = prices[t] * q;
+    if (!floatsApart(s, spend)) return false;
+    if (s < spend) {
+      qty = q;
+      tier = t;
+      spend = s;
+    }
+  }
+  out.qty = qty;
+  out.tier = tier;
+  out.spend = spend;
+  return true;
 }
 
 /** `orderSpend` plus the excess E = Q − R and its value E × price(Q). */

@@ -8,11 +8,23 @@ import { prepareCostRoll, rollPrepared, Dec, type CostRollInput } from '../costi
 import { getBom, linesOf, lineView, type BomRow } from '../boms/repository';
 import { loadCostingData } from '../boms/inputs';
 import { loadQuotes, today } from '../quotes/repository';
-import { newRevision, updateLine } from '../boms/service';
+import { newRevisionIn, updateLine } from '../boms/service';
 import { policyFor } from './policies';
 import { operatingPointOf, lineOf } from './service';
 
 const passing: StressStatus[] = ['clear', 'close'];
+
+/** The value that defines what a part does in the circuit, by category; other categories have none. */
+const valueKey: Record<string, string | undefined> = { resistor: 'resistanceOhm', capacitor: 'capacitanceF' };
+
+function sameValue(category: string, a: Record<string, unknown>, b: Record<string, unknown>): boolean {
+  const key = valueKey[category];
+  if (!key) return true;
+  const x = Number(a?.[key]);
+  const y = Number(b?.[key]);
+  if (!Number.isFinite(x) || !Number.isFinite(y)) return false;
+  return Math.abs(x - y) <= Math.abs(x) * 1e-9;
+}
 
 /**
  * Parts of the line's category that pass at its operating point under the BOM's policy,
@@ -34,6 +46,8 @@ export async function alternativesFor(deps: Deps, workspaceId: string, bomId: st
 
   const candidates = ((await scoped(deps.db, 'parts', workspaceId).andWhere({ category: current.category }).andWhereNot({ id: line.partId })
     .select('id', 'internalPn', 'mpn', 'manufacturer', 'description', 'package', 'ratings')) as { id: string; internalPn: string; mpn: string; manufacturer: string; description: string; package: string; ratings: Record<string, unknown> }[])
+    // Same value as the part on the line (a 22 MΩ bleeder stays 22 MΩ; a 1 nF capacitor stays 1 nF).
+    .filter((p) => sameValue(current.category, current.ratings, p.ratings))
     .map((p) => ({ ...p, status: statusOf(current.category, p.ratings) }))
     .filter((p) => passing.includes(p.status));
 
@@ -77,18 +91,25 @@ export async function alternativesFor(deps: Deps, workspaceId: string, bomId: st
  * and swaps the copied line there.
  */
 export async function swapPart(deps: Deps, auth: Auth, bomId: string, lineId: string, partId: string, version: number) {
-  let bom: BomRow = await getBom(deps.db, auth.workspaceId, bomId);
-  let targetLine = await lineOf(deps.db, auth.workspaceId, bomId, lineId);
-  if (targetLine.version !== version) throw errors.stale('line');
-  if (bom.state === 'released') {
-    const next = await newRevision(deps, auth, bomId);
-    bom = await getBom(deps.db, auth.workspaceId, next.id);
-    const copied = await linesOf(deps.db, auth.workspaceId, next.id);
-    const match = copied.find((l) => l.position === targetLine.position && l.partId === targetLine.partId);
-    if (!match) throw errors.conflict('The line was not found in the new revision.');
-    targetLine = match;
-  }
   return deps.db.transaction(async (trx) => {
+    let bom: BomRow = await getBom(trx, auth.workspaceId, bomId);
+    let targetLine = await lineOf(trx, auth.workspaceId, bomId, lineId);
+    if (targetLine.version !== version) throw errors.stale('line');
+    const [from, to] = await Promise.all([
+      scoped(trx, 'parts', auth.workspaceId).andWhere({ id: targetLine.partId }).first('category'),
+      scoped(trx, 'parts', auth.workspaceId).andWhere({ id: partId }).first('category'),
+    ]);
+    if (!to) throw errors.validation('No such part in this workspace.', [{ path: 'partId', message: 'refers to a missing part' }]);
+    if (from && from.category !== to.category) throw errors.validation('A swap keeps the part category.', [{ path: 'partId', message: `is a ${to.category}, the line holds a ${from.category}` }]);
+    // On a released BOM the swap goes to the next revision, in this same transaction.
+    if (bom.state === 'released') {
+      const next = await newRevisionIn(trx, auth, bomId);
+      bom = await getBom(trx, auth.workspaceId, next.id);
+      const copied = await linesOf(trx, auth.workspaceId, next.id);
+      const match = copied.find((l) => l.position === targetLine.position && l.partId === targetLine.partId);
+      if (!match) throw errors.conflict('The line was not found in the new revision.');
+      targetLine = match;
+    }
     const updated = await updateLine(deps, auth, bom.id, targetLine.id, { partId, pinnedQuoteId: null, version: targetLine.version }, trx);
     await audit(trx, { workspaceId: auth.workspaceId, userId: auth.userId, action: 'swap_part', entity: 'line', entityId: updated.id, changes: { from: targetLine.partId, to: partId, bomId: bom.id } });
     return { bomId: bom.id, revision: bom.revision, newRevision: bom.id !== bomId, line: lineView(updated) };

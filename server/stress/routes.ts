@@ -81,7 +81,7 @@ export const stressRoutes: RouteDef[] = [
         if (!line) throw errors.validation('This line has no stress checks to waive.');
         if (line.status === 'over_rating') throw errors.conflict('A line over its absolute rating cannot be waived; change the part or the circuit.');
         if (line.status !== 'beyond_policy') throw errors.conflict('Only a line beyond the policy needs a waiver.');
-        const [row] = await trx('stress_waivers').insert({ workspaceId: auth.workspaceId, bomId: params.id, lineId: params.lineId, reason: body.reason, waivedBy: auth.userId }).returning('*');
+        const [row] = await trx('stress_waivers').insert({ workspaceId: auth.workspaceId, bomId: params.id, lineId: params.lineId, policyId: s.policyId, reason: body.reason, waivedBy: auth.userId }).returning('*');
         await audit(trx, { workspaceId: auth.workspaceId, userId: auth.userId, action: 'waive', entity: 'line', entityId: params.lineId, changes: { bomId: params.id, reason: body.reason, checks: line.checks.filter((c) => c.status === 'beyond_policy').map((c) => c.check) } });
         return { id: row.id, lineId: params.lineId, reason: row.reason, createdAt: new Date(row.createdAt).toISOString() };
       }),

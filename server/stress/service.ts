@@ -10,6 +10,7 @@ import { policyFor, type PolicyRow } from './policies';
 export interface WaiverRow {
   id: string;
   lineId: string;
+  policyId: string | null;
   reason: string;
   waivedBy: string | null;
   waivedByName: string | null;
@@ -18,11 +19,11 @@ export interface WaiverRow {
 
 export const operatingPointOf = (l: LineRow) => ({ voltageV: l.opVoltageV, currentA: l.opCurrentA, powerW: l.opPowerW, ambientC: l.opAmbientC });
 
-type PartInfo = { id: string; category: string; ratings: Record<string, unknown>; internalPn: string; mpn: string };
+type PartInfo = { id: string; category: string; ratings: Record<string, unknown>; internalPn: string; mpn: string; updatedAt: Date };
 
 async function partsById(db: DbOrTrx, workspaceId: string, ids: string[]) {
   if (!ids.length) return new Map<string, PartInfo>();
-  const rows = (await scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [ids]).select('id', 'category', 'ratings', 'internalPn', 'mpn')) as PartInfo[];
+  const rows = (await scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [ids]).select('id', 'category', 'ratings', 'internalPn', 'mpn', 'updatedAt')) as PartInfo[];
   return new Map(rows.map((p) => [p.id, p]));
 }
 
@@ -43,12 +44,22 @@ export async function stressOf(db: DbOrTrx, workspaceId: string, bom: BomRow) {
     scoped(db, 'stress_waivers', workspaceId).andWhere({ bomId: bom.id })
       .leftJoin('users', 'users.id', 'stress_waivers.waivedBy')
       .orderBy('stress_waivers.id', 'desc')
-      .select('stress_waivers.id', 'stress_waivers.lineId', 'stress_waivers.reason', 'stress_waivers.waivedBy', 'users.name as waivedByName', 'stress_waivers.createdAt') as Promise<WaiverRow[]>,
+      .select('stress_waivers.id', 'stress_waivers.lineId', 'stress_waivers.policyId', 'stress_waivers.reason', 'stress_waivers.waivedBy', 'users.name as waivedByName', 'stress_waivers.createdAt') as Promise<WaiverRow[]>,
   ]);
   const parts = await partsById(db, workspaceId, [...new Set(lines.map((l) => l.partId).filter((x): x is string => Boolean(x)))]);
   const result = checkBom({ lines: stressInputs(lines, parts), policy: { id: policy.id, name: policy.name, limits: policy.limits }, bomAmbientC: Number(bom.ambientC) });
+  // A waiver lapses when what it waived changes: the line (operating point, part), the
+  // part's ratings, or the policy.
+  const lineById = new Map(lines.map((l) => [l.id, l]));
   const waiverOf = new Map<string, WaiverRow>();
-  for (const w of waivers) if (!waiverOf.has(w.lineId)) waiverOf.set(w.lineId, w);
+  for (const w of waivers) {
+    if (waiverOf.has(w.lineId)) continue;
+    const line = lineById.get(w.lineId);
+    const part = line?.partId ? parts.get(line.partId) : undefined;
+    const at = new Date(w.createdAt).getTime();
+    const stillHolds = line && w.policyId === policy.id && at >= new Date((line as LineRow & { updatedAt: Date }).updatedAt).getTime() && (!part || at >= new Date(part.updatedAt).getTime());
+    if (stillHolds) waiverOf.set(w.lineId, w);
+  }
   return {
     ...result,
     bomId: bom.id,

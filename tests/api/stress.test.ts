@@ -20,9 +20,11 @@ beforeAll(async () => {
   // 1206 chip, 0.25 W, LEV 200 V, 22 MΩ [CHIP-TF; C] and an HV chip with LEV 800 V (demo values).
   cheapChip = await makePart(o, { internalPn: 'R-22M-1206', ratings: { resistanceOhm: '22M', powerW: '1/4W', levV: '200V' } });
   hvChip = await makePart(o, { internalPn: 'R-22M-HV', ratings: { resistanceOhm: '22M', powerW: '1/4W', levV: '800V' } });
+  const cheapTenK = await makePart(o, { internalPn: 'R-10K-HV', ratings: { resistanceOhm: '10k', powerW: '1/4W', levV: '800V' } });
   const disc = await makePart(o, { internalPn: 'C-1N-2KV', category: 'capacitor', ratings: { capacitanceF: '1n', ratedVoltageV: '2kV', dielectric: 'hv_ceramic' } });
   await makeQuote(o, cheapChip.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0020' }] });
   await makeQuote(o, hvChip.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0090' }] });
+  await makeQuote(o, cheapTenK.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0010' }] });
   await makeQuote(o, disc.id, s.id, { currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0140' }] });
   const d = ws.agents.designer;
   bomId = (await d.post('/api/boms').send({ name: 'Ioniser', reportingCurrency: 'USD', profileId: profile.id, plannedQty: 1000, ambientC: '40' }).expect(201)).body.id;
@@ -63,7 +65,17 @@ describe('the stress check', () => {
     expect(needsWaiver.body.error.message).toMatch(/waiver/);
     await d.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'short' }).expect(400);
     await ws.agents.buyer.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'Buyers may not waive stress.' }).expect(403);
-    await d.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'Disc run at 75 % in a potted module; approved after the humidity test.' }).expect(201);
+    // A waiver lapses when the line changes: write one, change the operating point, and release is blocked again.
+    await d.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'First waiver, before the voltage was revised.' }).expect(201);
+    await d.post(`/api/boms/${bomId}/state`).send({ state: 'draft' }).expect(200);
+    const cap = (await d.get(`/api/boms/${bomId}/lines`)).body.items.find((l: { id: string }) => l.id === capLine.id);
+    await new Promise((r) => setTimeout(r, 20));
+    await d.patch(`/api/boms/${bomId}/lines/${capLine.id}`).send({ operatingPoint: { voltageV: '1.45kV' }, version: cap.version }).expect(200);
+    await d.post(`/api/boms/${bomId}/state`).send({ state: 'in_review' }).expect(200);
+    await ws.agents.owner.post(`/api/boms/${bomId}/state`).send({ state: 'released' }).expect(409);
+    const lapsed = (await d.get(`/api/boms/${bomId}/stress`)).body.lines.find((l: { lineId: string }) => l.lineId === capLine.id);
+    expect(lapsed.waiver).toBeNull();
+    await d.post(`/api/boms/${bomId}/lines/${capLine.id}/waivers`).send({ reason: 'Disc run at 72 % in a potted module; approved after the humidity test.' }).expect(201);
     const released = await ws.agents.owner.post(`/api/boms/${bomId}/state`).send({ state: 'released' }).expect(200);
     expect(released.body.state).toBe('released');
     const log = await ws.agents.owner.get('/api/audit').expect(200);
@@ -81,6 +93,11 @@ describe('the stress check', () => {
     const alt = await d.get(`/api/boms/${rev.id}/lines/${revChip.id}/alternatives`).expect(200);
     expect(alt.body.currentStatus).toBe('beyond_policy');
     expect(alt.body.candidates[0]).toMatchObject({ id: hvChip.id, status: 'clear' });
+    // Only parts of the same value are offered: a 10 kΩ chip that passes is not a 22 MΩ bleeder.
+    expect(alt.body.candidates.every((c: { internalPn: string }) => c.internalPn.includes('22M'))).toBe(true);
+    // And a swap keeps the category.
+    const disc = (await d.get(`/api/boms/${rev.id}/lines`)).body.items.find((l: { refDes: string }) => l.refDes === 'C1');
+    await d.post(`/api/boms/${rev.id}/lines/${revChip.id}/swap`).send({ partId: disc.partId, version: hot.body.version }).expect(400);
     // The HV chip costs 0.0070 more per piece, one per unit.
     expect(Number(alt.body.candidates[0].costDifference)).toBeCloseTo(0.007, 9);
     const swapped = await d.post(`/api/boms/${rev.id}/lines/${revChip.id}/swap`).send({ partId: hvChip.id, version: hot.body.version }).expect(200);

@@ -32,7 +32,7 @@ export function planPrice(monthlyCents: number): string {
 }
 
 export const statusLabels: Record<BillingStatus, string> = {
-  none: 'Free plan',
+  none: 'Free',
   active: 'Active',
   past_due: 'Payment past due',
   canceled: 'Subscription ended',

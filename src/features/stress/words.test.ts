@@ -22,7 +22,8 @@ describe('stress check words', () => {
       'applied = V = 190 V',
       'rated = min(√(P·R), LEV) = 200 V',
       'ratio = 190 V ÷ 200 V = 95 %',
-      'limit = 80 % [common practice (voltage ≤ 80 % of U_max); P]',
+      'limit = 80 % [common practice (voltage ≤ 80 % of U_max); common practice]',
     ]);
+    expect(formulaSteps('limit = 80 % [RAC Benign; C]')).toEqual(['limit = 80 % [RAC Benign; confirmed]']);
   });
 });

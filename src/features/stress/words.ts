@@ -67,7 +67,7 @@ export function describeMissing(path: string): MissingItem {
 export function formulaSteps(formula: string): string[] {
   return formula
     .split(/\n|;\s+(?![^[]*\])/)
-    .map((s) => s.trim())
+    .map((s) => s.trim().replace(/;\s*([CMP])\]$/, (_, mark: Confidence) => `; ${confidenceWords[mark]}]`))
     .filter(Boolean);
 }
 

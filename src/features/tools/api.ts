@@ -36,6 +36,9 @@ export type {
  */
 export { SAFE_VOLTAGE_PRESETS } from '../../../server/derating/helpers/discharge';
 
+/** The caution the helpers' answers carry, to show before anything is worked out (same source). */
+export { CAUTION_TEXT } from '../../../server/derating/caution';
+
 /** Each helper's endpoint with its input and its result. */
 export type HelperEndpoints = {
   multiplier: { input: MultiplierInput; result: MultiplierResult };

@@ -51,6 +51,11 @@ function partValue(ratings: Record<string, unknown> | undefined): { text: string
  */
 export function BomStressCheckRoute() {
   const id = useBomId();
+  // A swap on a released revision moves to the new one: start afresh there (its notice, no open dialogs).
+  return <StressCheckScreen key={id} id={id} />;
+}
+
+function StressCheckScreen({ id }: { id: string }) {
   const session = useSession();
   const navigate = useNavigate();
   const location = useLocation();
@@ -150,6 +155,7 @@ export function BomStressCheckRoute() {
         lineVersion={choosing ? (lineRefs.get(choosing.lineId)?.version ?? null) : null}
         released={released}
         revision={bom.revision}
+        nextRevision={Math.max(bom.revision, ...bom.revisions.map((r) => r.revision)) + 1}
         mayWrite={mayWrite}
         valueOf={valueOf}
         onClose={() => setChoosing(null)}

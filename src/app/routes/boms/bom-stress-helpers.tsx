@@ -1,5 +1,6 @@
 import { useId, useMemo, useState } from 'react';
 import { formatValue } from '../../../shared/units';
+import { CautionNotice } from '../../../components/ui/caution-notice';
 import { SidePanel } from '../../../components/ui/side-panel';
 import type { PartSummary } from '../../../features/boms/api';
 import type { PolicyLimits } from '../../../features/policies/api';
@@ -88,6 +89,7 @@ export function StressHelpersPanel({
       title="Circuit helpers"
       description={editable ? 'Work a figure out, then write it into the operating points of this BOM’s lines.' : 'Work a figure out. This revision cannot be changed here, so results are not written into lines.'}
     >
+      <CautionNotice>{stress.caution}</CautionNotice>
       <div role="group" aria-label="Helper" className="flex gap-2">
         {tab('resistor-string', 'Resistor string')}
         {tab('multiplier', 'Multiplier')}

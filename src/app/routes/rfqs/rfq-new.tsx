@@ -1,5 +1,7 @@
 import { useNavigate } from 'react-router-dom';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { can } from '../../../shared/permissions';
+import { FormAlert } from '../../../components/ui/form-alert';
 import { PageHeader } from '../../../components/ui/page-header';
 import { useSession } from '../../../features/auth/session-context';
 import { billingQueryOptions } from '../../../features/billing/api';
@@ -29,15 +31,20 @@ export function RfqNewRoute() {
         description="Each supplier you tick gets an e-mail with a private link: no account needed, a form or a spreadsheet to answer with."
       />
       <LimitBanner feature="rfq" role={session.role} />
-      <div className="rounded-lg border border-rule bg-surface p-6">
-        <RfqForm
-          boms={boms}
-          suppliers={suppliers}
-          searchParts={partSearchQueryOptions}
-          onCancel={() => navigate('/rfqs')}
-          onDone={(rfq) => navigate(`/rfqs/${rfq.id}`)}
-        />
-      </div>
+      {/* The RFQs list offers this screen to buyers and the owner only; this guards an address typed by hand. */}
+      {!can(session.role, 'rfqs.write') ? (
+        <FormAlert tone="info">Only buyers and the workspace owner send requests for quotation.</FormAlert>
+      ) : (
+        <div className="rounded-lg border border-rule bg-surface p-6">
+          <RfqForm
+            boms={boms}
+            suppliers={suppliers}
+            searchParts={partSearchQueryOptions}
+            onCancel={() => navigate('/rfqs')}
+            onDone={(rfq) => navigate(`/rfqs/${rfq.id}`)}
+          />
+        </div>
+      )}
     </>
   );
 }

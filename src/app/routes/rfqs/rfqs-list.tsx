@@ -27,14 +27,15 @@ export function RfqsListRoute() {
   const blocked = billing.data ? limitState(billing.data, 'rfq') : null;
 
   const newButton = !mayWrite ? null : blocked ? (
-    <div className="flex items-center gap-3">
-      <p id="new-rfq-blocked" className="max-w-xs text-right text-xs text-muted">
+    <>
+      {/* The banner below says it on screen; the button carries the reason for screen readers and as a tooltip. */}
+      <span id="new-rfq-blocked" className="sr-only">
         {blocked.reason}
-      </p>
-      <Button disabled aria-describedby="new-rfq-blocked">
+      </span>
+      <Button disabled aria-describedby="new-rfq-blocked" title={blocked.reason ?? undefined}>
         New RFQ
       </Button>
-    </div>
+    </>
   ) : (
     <Link to="/rfqs/new" className={buttonClasses()}>
       New RFQ
@@ -53,9 +54,11 @@ export function RfqsListRoute() {
         rfqs={rfqs}
         empty={
           <EmptyState title="No requests for quotation yet.">
-            {mayWrite
-              ? 'Choose the parts (or a whole BOM), the suppliers and the quantities; each supplier gets a private link to answer on. Use New RFQ above.'
-              : 'A buyer or the owner sends RFQs; they appear here for everyone in the workspace.'}
+            {!mayWrite
+              ? 'A buyer or the owner sends RFQs; they appear here for everyone in the workspace.'
+              : blocked
+                ? `Requests for quotation come with the ${blocked.upgradeTo?.name ?? 'paid'} plan and above.`
+                : 'Choose the parts (or a whole BOM), the suppliers and the quantities; each supplier gets a private link to answer on. Use New RFQ above.'}
           </EmptyState>
         }
       />

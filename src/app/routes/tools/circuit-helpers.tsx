@@ -1,4 +1,6 @@
+import { CautionNotice } from '../../../components/ui/caution-notice';
 import { PageHeader } from '../../../components/ui/page-header';
+import { CAUTION_TEXT } from '../../../features/tools/api';
 import { AccessiblePartHelper } from '../../../features/tools/components/accessible-part-helper';
 import { DischargeHelper } from '../../../features/tools/components/discharge-helper';
 import { HelperSection } from '../../../features/tools/components/helper-parts';
@@ -26,6 +28,7 @@ export function CircuitHelpersRoute() {
         title="Circuit helpers"
         description="Worst-case figures for high-voltage parts, in the trade's notations (2kV, 1n, 22M, 50kHz). They screen a design for review; they do not make it safe."
       />
+      <CautionNotice className="mb-4">{CAUTION_TEXT}</CautionNotice>
       <nav aria-label="Helpers on this page" className="mb-5">
         <ul className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
           {helpers.map((h) => (

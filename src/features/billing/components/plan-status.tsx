@@ -36,7 +36,7 @@ function StatusSentence({ billing }: { billing: Billing }) {
     case 'canceled':
       return <p>The subscription has ended; the workspace is on the free Bench plan. Nothing was deleted.</p>;
     default:
-      return <p>The free plan; no subscription and nothing to pay.</p>;
+      return <p>No subscription and nothing to pay.</p>;
   }
 }
 

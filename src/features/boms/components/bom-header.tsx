@@ -14,6 +14,7 @@ import type { BomDetail } from '../api';
 import { formatCount, formatPerUnit } from '../display';
 import { useChangeBomState, useDeleteBom, useNewRevision } from '../hooks';
 import { BomForm } from './bom-form';
+import { DownloadWorkbookButton } from './download-workbook-button';
 import { StateBadge } from './state-badge';
 
 /**
@@ -56,6 +57,7 @@ export function BomHeader({ bom, role }: { bom: BomDetail; role: Role }) {
 
   const actions = (
     <>
+      {can(role, 'export') ? <DownloadWorkbookButton bomId={bom.id} revision={bom.revision} /> : null}
       {mayWrite && bom.state === 'draft' ? (
         <Button variant="secondary" pending={changeState.isPending} onClick={() => move('in_review')}>
           Send to review

@@ -89,7 +89,7 @@ const columns = [
       const stress = info.row.original.stress;
       if (!stress) return <span className="text-muted" title="No stress policy in this workspace">—</span>;
       return (
-        <Link to={`/boms/${info.row.original.id}/stress-check`} aria-label={`Stress check of ${info.row.original.name} revision ${info.row.original.revision}`} className="block rounded hover:bg-paper">
+        <Link to={`/boms/${info.row.original.id}/stress-check`} title="Open the stress check" className="block rounded hover:bg-paper">
           <StressTally counts={stress} />
         </Link>
       );

@@ -13,7 +13,7 @@ function LimitCell({ limit }: { limit: PolicyLimit | undefined }) {
         {limit.confidence ? <Tag tone={limit.confidence === 'C' ? 'ok' : 'muted'}>{confidenceWords[limit.confidence]}</Tag> : null}
         <span className="font-medium tabular-nums">{formatPercent(limit.value)}</span>
       </span>
-      {limit.source ? <span className="max-w-56 text-right text-xs text-muted">{limit.source}</span> : null}
+      {limit.source ? <span className="max-w-44 text-right text-xs text-muted">{limit.source}</span> : null}
     </div>
   );
 }
@@ -31,7 +31,7 @@ function TjCell({ tj }: { tj: TjAllowed }) {
         {tj.confidence ? <Tag tone={tj.confidence === 'C' ? 'ok' : 'muted'}>{confidenceWords[tj.confidence]}</Tag> : null}
         <span className="font-medium whitespace-nowrap tabular-nums">{tjText(tj)}</span>
       </span>
-      {tj.source ? <span className="max-w-56 text-right text-xs text-muted">{tj.source}</span> : null}
+      {tj.source ? <span className="max-w-44 text-right text-xs text-muted">{tj.source}</span> : null}
     </div>
   );
 }
@@ -59,11 +59,11 @@ export function PoliciesTable({
 }) {
   const groups = [...new Set(LIMIT_ROWS.map((r) => r.groupLabel))];
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule bg-surface">
+    <div className="relative overflow-x-auto rounded-lg border border-rule bg-surface">
       <table aria-label="Stress policies" className="w-full border-collapse text-sm">
         <thead>
           <tr className="border-b border-rule align-top">
-            <th scope="col" className="px-3 py-2 text-left text-xs font-semibold tracking-wide text-muted uppercase">
+            <th scope="col" className="sticky left-0 z-10 min-w-44 bg-surface px-3 py-2 text-left text-xs font-semibold tracking-wide text-muted uppercase">
               Limit, as a share of the rating
             </th>
             {policies.map((p) => (
@@ -99,12 +99,12 @@ export function PoliciesTable({
             <Fragment key={group}>
               <tr className="bg-paper/60">
                 <th scope="rowgroup" colSpan={policies.length + 1} className="px-3 py-1.5 text-left text-xs font-semibold tracking-wide text-muted uppercase">
-                  {group}
+                  <span className="sticky left-3">{group}</span>
                 </th>
               </tr>
               {LIMIT_ROWS.filter((r) => r.groupLabel === group).map((r) => (
                 <tr key={r.id} className="border-t border-rule/60 align-top">
-                  <th scope="row" className="px-3 py-2 text-left font-normal">
+                  <th scope="row" className="sticky left-0 z-10 bg-surface px-3 py-2 text-left font-normal">
                     {r.label}
                   </th>
                   {policies.map((p) => (
@@ -116,7 +116,7 @@ export function PoliciesTable({
               ))}
               {group === 'Transistor' ? (
                 <tr className="border-t border-rule/60 align-top">
-                  <th scope="row" className="px-3 py-2 text-left font-normal">
+                  <th scope="row" className="sticky left-0 z-10 bg-surface px-3 py-2 text-left font-normal">
                     Junction temperature allowed
                   </th>
                   {policies.map((p) => (
@@ -129,7 +129,7 @@ export function PoliciesTable({
             </Fragment>
           ))}
           <tr className="border-t border-rule align-top">
-            <th scope="row" className="px-3 py-2 text-left font-normal text-muted">
+            <th scope="row" className="sticky left-0 z-10 bg-surface px-3 py-2 text-left font-normal text-muted">
               Notes
             </th>
             {policies.map((p) => (

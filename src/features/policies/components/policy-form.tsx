@@ -64,7 +64,7 @@ export function PolicyForm({ policy, onDone, onCancel }: { policy: StressPolicy;
         <TextField label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
         <TextareaField label="Notes" rows={2} error={errors.notes?.message} {...register('notes')} />
       </div>
-      <div className="overflow-x-auto rounded-md border border-rule">
+      <div className="relative overflow-x-auto rounded-md border border-rule">
         <table className="w-full text-sm">
           <thead className="text-xs font-semibold tracking-wide text-muted uppercase">
             <tr className="border-b border-rule">

@@ -43,6 +43,7 @@ function AlternativesBody({
   lineVersion,
   released,
   revision,
+  nextRevision,
   mayWrite,
   valueOf,
   onSwapped,
@@ -52,6 +53,8 @@ function AlternativesBody({
   lineVersion: number | null;
   released: boolean;
   revision: number;
+  /** The revision number a swap on a released revision makes (the family's highest plus one). */
+  nextRevision: number;
   mayWrite: boolean;
   valueOf: (partId: string) => PartValue;
   onSwapped: (result: SwapResult, part: Alternative, before: string, currency: string) => void;
@@ -77,7 +80,7 @@ function AlternativesBody({
         <span className="tabular-nums">{perUnit(data.currentLandedPerUnit)}</span> {data.currency} per unit at {data.qty.toLocaleString('en-GB')} units.
       </p>
       {released && mayWrite ? (
-        <FormAlert tone="info">Revision {revision} is released. Using a part makes revision {revision + 1} as a draft and puts the part there; this revision stays as it is.</FormAlert>
+        <FormAlert tone="info">Revision {revision} is released. Using a part makes revision {nextRevision} as a draft and puts the part there; this revision stays as it is.</FormAlert>
       ) : null}
       {swap.error ? <FormAlert>{isStaleVersion(swap.error) ? STALE_VERSION_MESSAGE : describeError(swap.error)}</FormAlert> : null}
       {data.candidates.length === 0 ? (
@@ -87,7 +90,7 @@ function AlternativesBody({
             : 'No part in the library passes at this operating point with a quote to cost it. Add one to the parts library, or change the circuit.'}
         </p>
       ) : (
-        <div className="overflow-x-auto rounded-md border border-rule">
+        <div className="relative overflow-x-auto rounded-md border border-rule">
           <table aria-label={data.direction === 'cheaper' ? 'Cheaper parts that pass' : 'Parts that pass'} className="w-full text-sm">
             <thead className="text-xs font-semibold tracking-wide text-muted uppercase">
               <tr className="border-b border-rule">
@@ -128,7 +131,7 @@ function AlternativesBody({
                     <td className="px-3 py-2">
                       <StatusBadge status={part.status} />
                     </td>
-                    <td className="num px-3 py-2">
+                    <td className="num px-3 py-2 whitespace-nowrap">
                       {perUnit(part.landedPerUnit)} <span className="text-muted">{data.currency}</span>
                     </td>
                     <td className="num px-3 py-2">
@@ -162,6 +165,7 @@ export function AlternativesDialog(props: {
   lineVersion: number | null;
   released: boolean;
   revision: number;
+  nextRevision: number;
   mayWrite: boolean;
   valueOf: (partId: string) => PartValue;
   onSwapped: (result: SwapResult, part: Alternative, before: string, currency: string) => void;
@@ -173,7 +177,7 @@ export function AlternativesDialog(props: {
   return (
     <Dialog
       open={line !== null}
-      size="lg"
+      size="xl"
       title={passing ? `Cheaper parts that pass for ${who}` : `Parts that pass for ${who}`}
       description="Parts of the same category that pass at this line's operating point under the BOM's stress policy."
       onClose={onClose}

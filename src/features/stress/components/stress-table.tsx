@@ -1,4 +1,4 @@
-import { Fragment, useState } from 'react';
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { formatValue, type Quantity } from '../../../shared/units';
 import { formatDateTime } from '../../../lib/format';
@@ -14,7 +14,8 @@ import { RatioBar } from './ratio-bar';
 
 const unitQuantity: Record<StressUnit, Quantity> = { V: 'voltage', A: 'current', W: 'power', '°C': 'temperature' };
 
-const show = (value: number | null, unit: StressUnit) => (value === null ? '—' : formatValue(value, unitQuantity[unit]));
+// Temperatures to four figures: a junction at 144.25 °C should not read as 144 °C beside a 150 °C maximum.
+const show = (value: number | null, unit: StressUnit) => (value === null ? '—' : formatValue(value, unitQuantity[unit], { digits: unit === '°C' ? 4 : 3 }));
 
 const categoryWords: Record<string, string> = { resistor: 'Resistor', capacitor: 'Capacitor', bjt: 'Bipolar transistor', mosfet: 'MOSFET', diode: 'Diode', led: 'LED' };
 
@@ -53,7 +54,7 @@ function MissingNote({ line, canEditPoint, onEditPoint }: { line: StressLine; ca
   const operating = [...new Set(items.filter((i) => i.where === 'operating').map((i) => i.text))];
   const ratings = [...new Set(items.filter((i) => i.where !== 'operating').map((i) => i.text))];
   return (
-    <p className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-muted">
+    <p className="mt-1.5 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-muted">
       {operating.length ? <span>Operating point needs: {operating.join(', ')}.</span> : null}
       {operating.length && canEditPoint ? (
         <Button variant="secondary" size="sm" onClick={onEditPoint}>
@@ -98,7 +99,7 @@ export function StressTable({
 }) {
   const [editing, setEditing] = useState<string | null>(null);
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule bg-surface">
+    <div className="relative overflow-x-auto rounded-lg border border-rule bg-surface">
       <table aria-label="Stress check" className="w-full border-collapse text-sm">
         <colgroup>
           <col />
@@ -146,28 +147,36 @@ export function StressTable({
             <tbody key={line.lineId} aria-labelledby={headingId} className="border-b-4 border-paper last:border-b-0">
               <tr className="bg-paper/50">
                 <th scope="rowgroup" colSpan={7} className="px-3 py-2 text-left font-normal">
-                  <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-2">
-                    <div className="flex min-w-0 flex-wrap items-center gap-x-3 gap-y-1">
+                  <div className="flex flex-wrap items-center justify-between gap-x-3 gap-y-2">
+                    <div className="flex min-w-0 flex-wrap items-center gap-x-2.5 gap-y-1">
                       <span id={headingId} className="font-semibold text-ink">
                         {line.refDes || '(no designator)'}
                       </span>
                       {line.partId ? (
-                        <Link to={`/parts/${line.partId}`} className="text-ink underline-offset-2 hover:text-copper-dark hover:underline">
+                        <Link
+                          to={`/parts/${line.partId}`}
+                          title={categoryWords[line.category] ?? line.category}
+                          className="text-ink underline-offset-2 hover:text-copper-dark hover:underline"
+                        >
                           {line.internalPn}
-                          {line.mpn ? <span className="text-muted"> · {line.mpn}</span> : null}
+                          {line.mpn ? <span className="text-xs text-muted"> · {line.mpn}</span> : null}
                         </Link>
                       ) : null}
-                      <span className="text-xs text-muted">{categoryWords[line.category] ?? line.category}</span>
                       <StatusBadge status={line.status} />
                     </div>
-                    <div className="flex flex-wrap items-center gap-2">
+                    <div className="ml-auto flex flex-wrap items-center gap-1.5">
+                      {!missingOperating && mayWrite && !released && ref && editing !== line.lineId ? (
+                        <Button variant="quiet" size="sm" className="font-normal text-muted" onClick={() => setEditing(line.lineId)}>
+                          Operating point<span className="sr-only"> of {who}</span>
+                        </Button>
+                      ) : null}
                       {canWaive ? (
                         <Button variant="secondary" size="sm" onClick={() => actions.onWaive(line)}>
                           Waive…<span className="sr-only"> {who}</span>
                         </Button>
                       ) : null}
                       {line.status !== 'needs_data' && line.partId ? (
-                        <Button variant={passing ? 'quiet' : 'secondary'} size="sm" onClick={() => actions.onAlternatives(line)}>
+                        <Button variant="secondary" size="sm" onClick={() => actions.onAlternatives(line)}>
                           {passing ? 'Cheaper parts that pass' : 'Parts that pass'}
                           <span className="sr-only"> for {who}</span>
                         </Button>
@@ -185,18 +194,7 @@ export function StressTable({
                   {line.status === 'beyond_policy' && !line.waiver ? (
                     <p className="mt-1.5 text-sm text-muted">Beyond the policy but inside the rating: release needs a written waiver, or a part that passes.</p>
                   ) : null}
-                  <div className="mt-1.5">
-                    <MissingNote line={line} canEditPoint={mayWrite && !released && Boolean(ref)} onEditPoint={() => setEditing(line.lineId)} />
-                  </div>
-                  {!missingOperating && mayWrite && !released && ref && editing !== line.lineId ? (
-                    <button
-                      type="button"
-                      onClick={() => setEditing(line.lineId)}
-                      className="mt-1 text-xs text-muted underline underline-offset-2 hover:text-ink"
-                    >
-                      Edit operating point<span className="sr-only"> of {who}</span>
-                    </button>
-                  ) : null}
+                  <MissingNote line={line} canEditPoint={mayWrite && !released && Boolean(ref)} onEditPoint={() => setEditing(line.lineId)} />
                 </th>
               </tr>
               {editing === line.lineId && ref ? (
@@ -207,9 +205,7 @@ export function StressTable({
                 </tr>
               ) : null}
               {line.checks.map((check) => (
-                <Fragment key={check.check}>
-                  <CheckRow line={line} check={check} />
-                </Fragment>
+                <CheckRow key={check.check} line={line} check={check} />
               ))}
             </tbody>
           );

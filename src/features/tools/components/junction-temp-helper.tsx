@@ -51,7 +51,7 @@ export function JunctionTempHelper({ defaults = emptyJunctionTemp }: { defaults?
           label="Junction temperature result"
           status={<StatusBadge status={r.status} />}
           figures={[
-            { label: 'Junction temperature Tj', value: formatValue(r.tjC, 'temperature') },
+            { label: 'Junction temperature Tj', value: formatValue(r.tjC, 'temperature', { digits: 4 }) },
             { label: 'Rise above ambient', value: `${Number(r.riseC.toPrecision(3))} °C` },
             { label: 'Allowed dissipation at Tj max', value: formatValue(r.allowedPowerW, 'power') },
             { label: 'Allowed dissipation at Tj limit', value: r.allowedPowerAtLimitW === null ? '—' : formatValue(r.allowedPowerAtLimitW, 'power') },

@@ -152,14 +152,19 @@ export async function submitAnswers(deps: Deps, token: string, body: RfqAnswerBo
   const r: RecipientRow = await recipientByToken(deps.db, token);
   const items = (await scoped(deps.db, 'rfq_items', r.workspaceId).andWhere({ rfqId: r.rfqId }).select('id', 'partId')) as { id: string; partId: string }[];
   const byId = new Map(items.map((i) => [i.id, i]));
-  const unknown = body.items.filter((a) => !byId.has(a.itemId));
-  if (unknown.length) throw errors.validation('An answer names a part this request does not ask for.', unknown.map((a) => ({ path: `items.${a.itemId}`, message: 'is not in this request' })));
+  // Problems name the answer by its position in the request, as the schema's own do.
+  const unknown = body.items.map((a, i) => ({ a, i })).filter(({ a }) => !byId.has(a.itemId));
+  if (unknown.length) throw errors.validation('An answer names a part this request does not ask for.', unknown.map(({ i }) => ({ path: `items.${i}.itemId`, message: 'is not in this request' })));
   const validFrom = today();
   const result = await deps.db.transaction(async (trx) => {
     let quotes = 0;
     let declined = 0;
-    for (const a of body.items) {
-      if (!a.declined && a.validUntil < validFrom) throw errors.validation('An offer is already expired.', [{ path: `items.${a.itemId}.validUntil`, message: 'must be today or later' }]);
+    const previous = new Map(((await trx('rfq_answers').where({ recipientId: r.id }).select('itemId', 'quoteId')) as { itemId: string; quoteId: string | null }[]).map((x) => [x.itemId, x.quoteId]));
+    for (const [index, a] of body.items.entries()) {
+      if (!a.declined && a.validUntil < validFrom) throw errors.validation('An offer is already expired.', [{ path: `items.${index}.validUntil`, message: 'must be today or later' }]);
+      // A corrected answer replaces the supplier's earlier offer for that part.
+      const old = previous.get(a.itemId);
+      if (old) await scoped(trx, 'quotes', r.workspaceId).andWhere({ id: old, source: 'rfq' }).delete();
       let quoteId: string | null = null;
       if (a.declined) declined++;
       else {

@@ -54,6 +54,13 @@ describe('requests for quotation', () => {
     expect(after.body.recipients.find((r: { supplierName: string }) => r.supplierName === 'Alpha Passives').status).toBe('answered');
     const told = await waitForMail(t.sink, buyer.body.email, 10_000, 'answered');
     expect(told.subject).toMatch(/Alpha Passives answered/);
+    // A corrected answer replaces the earlier offer instead of adding a second one.
+    await anon().post(`/api/rfq-replies/${token}`).send({
+      items: [{ itemId: r1.itemId, declined: false, currency: 'CNY', incoterm: 'FOB', moq: 5000, orderMultiple: 5000, leadTimeDays: 21, validUntil: day(60), priceBreaks: [{ minQty: 10000, unitPrice: '0.0019' }] }],
+    }).expect(200);
+    const offers = (await buyer.agent.get('/api/quotes').query({ partId: parts[0].id }).expect(200)).body.items.filter((q: { source: string; supplierId: string }) => q.source === 'rfq' && q.supplierId === alpha.id);
+    expect(offers).toHaveLength(1);
+    expect(offers[0].priceBreaks).toEqual([{ minQty: 10000, unitPrice: '0.001900' }]);
   });
 
   it('a token reaches only its own supplier and RFQ: anything else is 404', async () => {

@@ -21,7 +21,15 @@ export interface BrowserApp {
 }
 
 /** The built client and the real API on a loopback port, driven by Debian's Chromium. */
-export async function startBrowserApp(suite: string): Promise<BrowserApp> {
+export function startBrowserApp(suite: string): Promise<BrowserApp> {
+  return startBrowserAppWith(suite, async () => ({}));
+}
+
+/**
+ * Like startBrowserApp, with extra server environment worked out from the app's own
+ * address before it starts (e.g. a payment-service fake that posts webhooks back to it).
+ */
+export async function startBrowserAppWith(suite: string, extraEnv: (url: string) => Promise<Record<string, string>>): Promise<BrowserApp> {
   const port = await new Promise<number>((resolve) => {
     const s = createServer();
     s.listen(0, '127.0.0.1', () => {
@@ -30,7 +38,7 @@ export async function startBrowserApp(suite: string): Promise<BrowserApp> {
     });
   });
   const url = `http://127.0.0.1:${port}`;
-  const t = await startTestApp({ SERVE_CLIENT: 'true', CLIENT_DIST: 'dist', PUBLIC_URL: url });
+  const t = await startTestApp({ ...(await extraEnv(url)), SERVE_CLIENT: 'true', CLIENT_DIST: 'dist', PUBLIC_URL: url });
   const server: Server = await new Promise((resolve) => {
     const s = t.farthing.app.listen(port, '127.0.0.1', () => resolve(s));
   });

@@ -30,7 +30,8 @@ export function useCreateBom() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: BomCreateBody) => api.post<Bom>('/api/boms', body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: bomKeys.lists() }),
+    // The plan's BOM count changes too.
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: bomKeys.lists() }), queryClient.invalidateQueries({ queryKey: ['billing'] })]),
   });
 }
 

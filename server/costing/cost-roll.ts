@@ -18,7 +18,6 @@ import {
 import { prepareProfile, type PreparedProfile } from './profile';
 import {
   compareQuotes,
-  convertedGoods,
   eligibilityReasons,
   LandedFactors,
   prepareQuote,

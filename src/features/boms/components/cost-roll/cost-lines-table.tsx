@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
 import { createColumnHelper } from '@tanstack/react-table';
 import { DataTable } from '../../../../components/ui/data-table/data-table';
 import { Tag } from '../../../../components/ui/tag';
@@ -29,9 +30,13 @@ function columnsFor(currency: string) {
       cell: (info) => {
         const line = info.row.original;
         if (!line.partId) return <span className="text-muted capitalize">{line.kind}</span>;
+        // Every offer for this part at this line's quantity, side by side.
+        const board = `/quote-board?part=${encodeURIComponent(line.partId)}${line.requiredQty ? `&qty=${line.requiredQty}` : ''}`;
         return (
           <span className="whitespace-nowrap">
-            <span className="font-medium">{line.internalPn}</span>
+            <Link to={board} className="font-medium underline-offset-2 hover:underline" title="Open the quote board for this part">
+              {line.internalPn}
+            </Link>
             {line.mpn ? <span className="text-muted"> {line.mpn}</span> : null}
           </span>
         );

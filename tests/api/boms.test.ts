@@ -168,8 +168,8 @@ describe('the stored roll-up', () => {
   it('the BOM list reads the landed cost at the planned quantity and it follows a quote change', async () => {
     const bom = await newBom({ plannedQty: 1000 });
     await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: partB.id, qtyPerUnit: '1' }).expect(201);
-    const first = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id);
-    expect(first.cost.landedPerUnit).toBe('0.0150000000');
+    await expect.poll(async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id).cost, { timeout: 10_000 })
+      .toMatchObject({ landedPerUnit: '0.0150000000', fresh: true });
     const stored = await t.database.db('cost_rollups').where({ bomId: bom.id }).first();
     expect(stored.landedPerUnit).toBe('0.0150000000');
     const q = (await ws.agents.owner.get('/api/quotes').query({ partId: partB.id })).body.items[0];

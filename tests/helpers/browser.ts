@@ -1,7 +1,6 @@
 import { existsSync, mkdirSync } from 'node:fs';
-import { createServer } from 'node:net';
+import { freePort } from './ports';
 import { join } from 'node:path';
-import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { startTestApp, type TestApp } from './app';
@@ -30,13 +29,7 @@ export function startBrowserApp(suite: string): Promise<BrowserApp> {
  * address before it starts (e.g. a payment-service fake that posts webhooks back to it).
  */
 export async function startBrowserAppWith(suite: string, extraEnv: (url: string) => Promise<Record<string, string>>): Promise<BrowserApp> {
-  const port = await new Promise<number>((resolve) => {
-    const s = createServer();
-    s.listen(0, '127.0.0.1', () => {
-      const p = (s.address() as AddressInfo).port;
-      s.close(() => resolve(p));
-    });
-  });
+  const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const t = await startTestApp({ ...(await extraEnv(url)), SERVE_CLIENT: 'true', CLIENT_DIST: 'dist', PUBLIC_URL: url });
   const server: Server = await new Promise((resolve) => {

@@ -1,7 +1,7 @@
 import type { DbOrTrx } from '../db/knex';
 import { scoped } from '../db/scope';
 import type { CostRollInput, BomLine, Part, LandedCostProfile } from '../costing';
-import { loadQuotes } from '../quotes/repository';
+import { quotesForCosting } from '../quotes/repository';
 import { ratesAsOf, pivotOf } from '../fx/repository';
 import { getProfile } from '../profiles/repository';
 import type { BomRow, LineRow } from './repository';
@@ -34,21 +34,21 @@ export interface CostingData {
  * the profile, the FX rows as of the costing date and the pivot currency.
  */
 export async function loadCostingData(db: DbOrTrx, workspaceId: string, bom: BomRow, date: string): Promise<CostingData> {
-  const lines = await linesOf(db, workspaceId, bom.id);
-  const partIds = [...new Set(lines.map((l) => l.partId).filter((x): x is string => Boolean(x)))];
-  const [parts, quotes, profile, fxRates, pivot] = await inParallel(db, [
-    () => partIds.length
-      ? (scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [partIds]).select('id', 'internalPn', 'mpn', 'manufacturer', 'description', 'category', 'mount', 'pins', 'hsCode', 'unitWeightG', 'ratings') as Promise<CostingData['parts']>)
-      : Promise.resolve([] as CostingData['parts']),
-    () => partIds.length ? loadQuotes(db, workspaceId, { partIds }) : Promise.resolve([]),
+  // The parts and quotes are found from the BOM inside their own queries, so every read
+  // runs side by side with the lines instead of after them.
+  const bomParts = 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
+  const [lines, parts, quotes, suppliers, profile, fxRates, pivot] = await inParallel(db, [
+    () => linesOf(db, workspaceId, bom.id),
+    () => scoped(db, 'parts', workspaceId)
+      .andWhereRaw(`id = ANY(${bomParts})`, [workspaceId, bom.id])
+      .select('id', 'internalPn', 'mpn', 'manufacturer', 'description', 'category', 'mount', 'pins', 'hsCode', 'unitWeightG', 'ratings') as Promise<CostingData['parts']>,
+    () => quotesForCosting(db, workspaceId, { bomId: bom.id }),
+    // All the workspace's suppliers (tens, not thousands): no wait for the quotes first.
+    () => scoped(db, 'suppliers', workspaceId).select('id', 'active', 'name') as Promise<{ id: string; active: boolean; name: string }[]>,
     () => bom.profileId ? getProfile(db, workspaceId, bom.profileId) : Promise.resolve(undefined),
     () => ratesAsOf(db, workspaceId, date),
     () => pivotOf(db, workspaceId),
   ] as const);
-  const supplierIds = [...new Set(quotes.map((q) => q.supplierId))];
-  const suppliers = supplierIds.length
-    ? ((await scoped(db, 'suppliers', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [supplierIds]).select('id', 'active', 'name')) as { id: string; active: boolean; name: string }[])
-    : [];
   const engineLines: BomLine[] = lines.map((l) => ({
     id: l.id, refDes: l.refDes || null, kind: l.kind as BomLine['kind'], partId: l.partId, qtyPerUnit: l.qtyPerUnit,
     attritionPct: l.attritionPct, pinnedQuoteId: l.pinnedQuoteId, dnp: l.dnp, unitCost: l.unitCost, oneTimeCost: l.oneTimeCost, currency: l.currency,
@@ -62,7 +62,7 @@ export async function loadCostingData(db: DbOrTrx, workspaceId: string, bom: Bom
       profile: profile ?? {},
       lines: engineLines,
       parts,
-      quotes: quotes.map((q) => ({ ...q, createdAt: new Date(q.createdAt).toISOString() })) as unknown as CostRollInput['quotes'],
+      quotes,
       suppliers,
       fxRates,
       pivot,

@@ -6,6 +6,7 @@ import { needsAdder } from './incoterms';
 import { lineAdders, type LineAdders } from './landed';
 import {
   floatsApart,
+  microPrices,
   orderSpend,
   orderSpendFloat,
   rankingFloat,
@@ -28,6 +29,7 @@ import {
 } from './quote-choice';
 import type {
   BomLine,
+  Incoterm,
   CategoryTotal,
   CostRollInput,
   CostRollLine,
@@ -69,6 +71,8 @@ interface Candidate {
   multiplier: Dec;
   /** `multiplier` as a float for ranking (NaN when a float cannot stand in). */
   multiplierF: number;
+  /** The totals-only roll's group for a line that buys this quote (see `Group`). */
+  groupKey: string;
 }
 
 /** Everything about a part line that does not depend on the build quantity. */
@@ -247,7 +251,7 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
           continue;
         }
         const multiplier = factors.multiplier(slot.incoterm, duty, r);
-        candidates.push({ slot, fx: r, multiplier, multiplierF: rankingFloat(multiplier) });
+        candidates.push({ slot, fx: r, multiplier, multiplierF: rankingFloat(multiplier), groupKey: groupKey(part.category, duty, slot.quote.supplierId, slot.incoterm, slot.quote.currency) });
       }
       partRanks.set(part.id, (shared = { part, duty, candidates, fxMissing }));
     }
@@ -388,6 +392,31 @@ const EXACT = 2;
 function cheapest(cands: Candidate[], required: number, duty: DutyMatch, factors: LandedFactors): Chosen | undefined {
   const n = cands.length;
   if (n === 0) return undefined;
+  const settled = settle(cands, required);
+  if (settled >= 0) {
+    const c = cands[settled];
+    const o = scratchOrders[settled];
+    return { pq: c.slot, order: spendAt(c.slot.terms, o.tier, o.qty), fx: c.fx };
+  }
+  let best: PricedQuote | undefined;
+  for (let k = 0; k < n; k++) {
+    if (scratchState[k] === DROP) continue;
+    const c = cands[k];
+    const o = scratchOrders[k];
+    const order = scratchState[k] === FLOAT ? spendAt(c.slot.terms, o.tier, o.qty) : orderSpend(c.slot.terms, required);
+    const priced = priceQuote(c.slot, required, c.fx, duty, factors, order);
+    if (!best || compareQuotes(priced, best) < 0) best = priced;
+  }
+  return best;
+}
+
+/**
+ * Ranks the candidates in floats. Returns the winner's index when the floats settle it
+ * (its order is in `scratchOrders`), else -1 with `scratchState` naming the candidates
+ * that must be compared exactly.
+ */
+function settle(cands: Candidate[], required: number): number {
+  const n = cands.length;
   while (scratchOrders.length < n) scratchOrders.push({ qty: 0, tier: 0, spend: 0 });
   let min = Number.POSITIVE_INFINITY;
   let minK = -1;
@@ -412,21 +441,7 @@ function cheapest(cands: Candidate[], required: number, duty: DutyMatch, factors
       last = k;
     }
   }
-  if (kept === 1 && scratchState[last] === FLOAT) {
-    const c = cands[last];
-    const o = scratchOrders[last];
-    return { pq: c.slot, order: spendAt(c.slot.terms, o.tier, o.qty), fx: c.fx };
-  }
-  let best: PricedQuote | undefined;
-  for (let k = 0; k < n; k++) {
-    if (scratchState[k] === DROP) continue;
-    const c = cands[k];
-    const o = scratchOrders[k];
-    const order = scratchState[k] === FLOAT ? spendAt(c.slot.terms, o.tier, o.qty) : orderSpend(c.slot.terms, required);
-    const priced = priceQuote(c.slot, required, c.fx, duty, factors, order);
-    if (!best || compareQuotes(priced, best) < 0) best = priced;
-  }
-  return best;
+  return kept === 1 && scratchState[last] === FLOAT ? last : -1;
 }
 
 /** The reference ranking: every eligible quote priced and compared in decimal.js (for tests). */
@@ -634,6 +649,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   const warnings: RollWarning[] = [...p.staticWarnings];
   const wantLines = options.lines !== false;
   const reference = options.exactRanking === true;
+  if (!wantLines && !reference) return rollTotals(p, buildQty, N, amortiseOver, warnings);
 
   const work: Work[] = p.lines.map((pl) => {
     const w: Work = {
@@ -677,7 +693,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
   const byCategory = new Map<string, Sums>();
-  const bySupplier = new Map<string, { goods: Dec; excessValue: Dec; landed: Dec; count: number }>();
+  const bySupplier = new Map<string, SupplierSums>();
   // Rows come from cached lookups, so the same few objects recur on every line.
   const fxSeen = new Set<FxRateUsed>();
   const noteFx = (rows: FxRateUsed[]) => {
@@ -729,6 +745,38 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     w.adders = undefined;
   }
 
+  const lines: CostRollLine[] = wantLines
+    ? [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => w.out ?? lineOutput(w, N))
+    : [];
+  return rollResult(p, N, amortiseOver, {
+    warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines,
+    leftOut: work.filter((w) => w.status === 'left_out'),
+    dnp: work.filter((w) => w.status === 'dnp'),
+  });
+}
+
+interface RollParts {
+  warnings: RollWarning[];
+  byCategory: Map<string, Sums>;
+  bySupplier: Map<string, SupplierSums>;
+  costLinesPerUnit: Dec;
+  oneTimeTotal: Dec;
+  fxSeen: Set<FxRateUsed>;
+  lines: CostRollLine[];
+  leftOut: Work[];
+  dnp: Work[];
+}
+
+interface SupplierSums {
+  goods: Dec;
+  excessValue: Dec;
+  landed: Dec;
+  count: number;
+}
+
+/** The result from the category and supplier sums: totals, breakdowns, left-out lines. */
+function rollResult(p: PreparedCostRoll, N: Dec, amortiseOver: Dec, r: RollParts): CostRollResult {
+  const { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, lines } = r;
   // Totals from the category sums, in category order: the same figures, fewer additions.
   const categoryKeys = [...byCategory.keys()].sort();
   const total = emptySums();
@@ -738,8 +786,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   // × N and one-time costs' share of this build (N / amortisation quantity).
   const landedTotal = total.landed;
   const landedPerUnit = landedTotal.div(N);
-  const leftOutLines = work
-    .filter((w) => w.status === 'left_out')
+  const leftOutLines = r.leftOut
     .sort((a, b) => a.pl.index - b.pl.index)
     .map((w) => ({
       lineId: w.pl.line.id,
@@ -748,7 +795,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
       ...(w.leftOut!.detail ? { detail: w.leftOut!.detail } : {}),
     }));
   if (leftOutLines.length > 0) warnings.push({ code: 'lines_left_out', detail: String(leftOutLines.length) });
-  const dnpIds = work.filter((w) => w.status === 'dnp').sort((a, b) => a.pl.index - b.pl.index).map((w) => w.pl.line.id);
+  const dnpIds = r.dnp.sort((a, b) => a.pl.index - b.pl.index).map((w) => w.pl.line.id);
 
   const perUnit = (v: Dec) => perUnitText(v.div(N));
   const categoryRows: CategoryTotal[] = categoryKeys
@@ -773,10 +820,6 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
       landed: moneyText(s.landed),
       landedPerUnit: perUnit(s.landed),
     }));
-
-  const lines: CostRollLine[] = wantLines
-    ? [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => w.out ?? lineOutput(w, N))
-    : [];
 
   return {
     qty: N.toNumber(),
@@ -808,8 +851,231 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     warnings,
     leftOut: { count: leftOutLines.length, lines: leftOutLines },
     dnp: { count: dnpIds.length, lineIds: dnpIds },
-    fxRates: usedRates(fxSeen),
+    fxRates: usedRates(r.fxSeen),
   };
+}
+
+// ---------------------------------------------------------------------------------------
+// Totals only (the volume curve)
+
+/**
+ * Part lines whose chosen quotes share category, duty rate, supplier, Incoterm and
+ * currency. Every adder is linear in the goods value and the per-shipment shares
+ * (`lineAdders`), and shares are proportional to goods value or weight, so a group's adders
+ * are the sum of its lines' adders. Goods and excess are summed as exact integers
+ * (millionths of the quote's currency) and converted once per group: a curve point costs
+ * integer work per line and decimal work per group, not per line.
+ */
+interface Group {
+  category: string;
+  duty: DutyMatch;
+  supplierId: string;
+  incoterm: Incoterm;
+  fx: FxFound;
+  count: number;
+  goodsMicro: number;
+  excessMicro: number;
+  /** What no longer fits a safe integer, in millionths. */
+  goodsBig: bigint;
+  excessBig: bigint;
+  /** Goods and excess of lines priced in decimal.js, already in the reporting currency. */
+  goodsDec: Dec;
+  excessDec: Dec;
+  weight: Dec;
+  assemblyPerUnit: Dec;
+  goods: Dec;
+}
+
+function groupKey(category: string, duty: DutyMatch, supplierId: string, incoterm: string, currency: string): string {
+  return `${category}\u0001${duty.ratePct.toString()}\u0001${supplierId}\u0001${incoterm}\u0001${currency}`;
+}
+
+const MICRO = new Dec(1_000_000);
+
+function micros(small: number, big: bigint): Dec {
+  return (big === 0n ? new Dec(small) : new Dec((BigInt(small) + big).toString())).div(MICRO);
+}
+
+/** The totals-only roll: `rollPrepared`'s figures with lines grouped as `Group` says. */
+function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec, warnings: RollWarning[]): CostRollResult {
+  const groups = new Map<string, Group>();
+  const groupFor = (key: string, category: string, duty: DutyMatch, pq: PreparedQuote, fx: FxFound): Group => {
+    let g = groups.get(key);
+    if (!g) {
+      g = {
+        category, duty, supplierId: pq.quote.supplierId, incoterm: pq.incoterm, fx, count: 0,
+        goodsMicro: 0, excessMicro: 0, goodsBig: 0n, excessBig: 0n,
+        goodsDec: ZERO, excessDec: ZERO, weight: ZERO, assemblyPerUnit: ZERO, goods: ZERO,
+      };
+      groups.set(key, g);
+    }
+    return g;
+  };
+  const costWork: Work[] = [];
+  const leftOut: Work[] = [];
+  const dnp: Work[] = [];
+  const newWork = (pl: PreparedLine): Work => ({ pl, status: 'costed', warnings: [], category: pl.line.kind, assemblyPerUnit: ZERO, fxRows: [], assembly: ZERO, landed: ZERO });
+
+  for (const pl of p.lines) {
+    if (pl.line.dnp) {
+      dnp.push(newWork(pl));
+      continue;
+    }
+    const rank = pl.rank;
+    if (pl.line.kind !== 'part') {
+      const w = costCostLine(p, newWork(pl));
+      (w.status === 'left_out' ? leftOut : costWork).push(w);
+      continue;
+    }
+    // The common case in integers: a part line, no pin, floats settle the choice, a
+    // 6-decimal price, freight not shared by weight.
+    if (rank && !pl.line.pinnedQuoteId && !p.byWeight && rank.candidates.length > 0) {
+      const required = lineRequired(pl, rank, buildQty, N);
+      const k = settle(rank.candidates, required);
+      const c = k >= 0 ? rank.candidates[k] : undefined;
+      const o = scratchOrders[k];
+      const price = c ? microPrices(c.slot.terms)[o.tier] : Number.NaN;
+      const goods = o ? o.qty * price : Number.NaN;
+      const excess = o ? (o.qty - required) * price : Number.NaN;
+      if (c && Number.isSafeInteger(goods) && Number.isSafeInteger(excess)) {
+        const g = groupFor(c.groupKey, rank.part.category, rank.duty, c.slot, c.fx);
+        g.count += 1;
+        const gm = g.goodsMicro + goods;
+        if (Number.isSafeInteger(gm)) g.goodsMicro = gm;
+        else g.goodsBig += BigInt(goods);
+        const em = g.excessMicro + excess;
+        if (Number.isSafeInteger(em)) g.excessMicro = em;
+        else g.excessBig += BigInt(excess);
+        if (p.assemblyRates.ok) {
+          const a = (pl.assembly ??= lineAssembly(p.assemblyRates, pl.qtyPerUnit, rank.part));
+          g.assemblyPerUnit = add(g.assemblyPerUnit, a.perUnit);
+        }
+        continue;
+      }
+    }
+    // Everything else line by line in decimal.js, as `rollPrepared` does, then into its group.
+    const w = costPartLine(p, newWork(pl), buildQty, N, false);
+    if (w.status === 'left_out' || !w.chosen) {
+      leftOut.push(w);
+      continue;
+    }
+    const ch = w.chosen;
+    const g = groupFor(groupKey(w.category, w.duty!, ch.pq.quote.supplierId, ch.pq.incoterm, ch.pq.quote.currency), w.category, w.duty!, ch.pq, ch.fx);
+    g.count += 1;
+    g.goodsDec = add(g.goodsDec, w.goods!);
+    const excessInQuote = ch.order.unitPrice.times(ch.order.orderQty - w.required!);
+    g.excessDec = add(g.excessDec, ch.fx.route === 'same' ? excessInQuote : excessInQuote.times(ch.fx.rate));
+    if (w.weight) g.weight = add(g.weight, w.weight);
+    g.assemblyPerUnit = add(g.assemblyPerUnit, w.assemblyPerUnit);
+  }
+
+  const all = [...groups.values()];
+  for (const g of all) {
+    const inQuote = micros(g.goodsMicro, g.goodsBig);
+    g.goods = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.goodsDec);
+  }
+  const freightCarriers = all.filter((g) => needsAdder(g.incoterm, 'freight'));
+  const feeCarriers = all.filter((g) => needsAdder(g.incoterm, 'fees'));
+  const byWeight = p.byWeight;
+  const freightShares = p.freightPool.ok
+    ? shareGroups(p.freightPool.value, freightCarriers, byWeight ? (g) => g.weight : (g) => g.goods, warnings, byWeight ? 'freight_weight_zero' : null)
+    : null;
+  const feeShares = p.feesPool.ok ? shareGroups(p.feesPool.value, feeCarriers, (g) => g.goods, warnings, null) : null;
+  if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
+    warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
+  }
+  if (p.feesPool.ok && !p.feesPool.value.isZero() && feeCarriers.length === 0) {
+    warnings.push({ code: 'fees_unallocated', detail: 'no chosen quote has an Incoterm that carries fees' });
+  }
+
+  let costLinesPerUnit = ZERO;
+  let oneTimeTotal = ZERO;
+  const byCategory = new Map<string, Sums>();
+  const bySupplier = new Map<string, SupplierSums>();
+  const fxSeen = new Set<FxRateUsed>();
+  const noteFx = (rows: FxRateUsed[]) => {
+    for (const r of rows) fxSeen.add(r);
+  };
+  if (p.freightPool.ok && freightShares) noteFx(p.freightPool.rows);
+  if (p.feesPool.ok && feeShares) noteFx(p.feesPool.rows);
+  if (p.assemblyRates.ok) noteFx(p.assemblyRates.rows);
+  const categorySums = (category: string) => {
+    let c = byCategory.get(category);
+    if (!c) byCategory.set(category, (c = emptySums()));
+    return c;
+  };
+
+  for (const g of all) {
+    noteFx(g.fx.rows);
+    const a = lineAdders({
+      goods: g.goods,
+      incoterm: g.incoterm,
+      pct: p.profile.pct,
+      dutyBasis: p.profile.dutyBasis,
+      dutyRate: g.duty.rate,
+      freightShare: freightShares?.get(g),
+      feesShare: feeShares?.get(g),
+    });
+    const assembly = g.assemblyPerUnit.isZero() ? ZERO : g.assemblyPerUnit.times(N);
+    const landed = add(a.landed, assembly);
+    const inQuote = micros(g.excessMicro, g.excessBig);
+    const excessValue = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.excessDec);
+    const c = categorySums(g.category);
+    c.goods = add(c.goods, g.goods);
+    c.excessValue = add(c.excessValue, excessValue);
+    c.origin = add(c.origin, a.origin);
+    c.freight = add(c.freight, a.freight);
+    c.insurance = add(c.insurance, a.insurance);
+    c.duty = add(c.duty, a.duty);
+    c.fees = add(c.fees, a.fees);
+    c.destination = add(c.destination, a.destination);
+    c.assembly = add(c.assembly, assembly);
+    c.landed = add(c.landed, landed);
+    c.count += g.count;
+    let s = bySupplier.get(g.supplierId);
+    if (!s) bySupplier.set(g.supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
+    s.goods = add(s.goods, g.goods);
+    s.excessValue = add(s.excessValue, excessValue);
+    s.landed = add(s.landed, landed);
+    s.count += g.count;
+  }
+  for (const w of costWork) {
+    noteFx(w.fxRows);
+    const perUnit = w.costPerUnit ?? ZERO;
+    const oneTime = w.oneTimeCost ?? ZERO;
+    costLinesPerUnit = add(costLinesPerUnit, perUnit);
+    oneTimeTotal = add(oneTimeTotal, oneTime);
+    w.landed = perUnit.times(N).plus(oneTime.times(N).div(amortiseOver));
+    addLine(categorySums(w.category), w);
+  }
+  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines: [], leftOut, dnp });
+}
+
+/** `sharePool` for groups: a group's share is the sum of its lines' shares. */
+function shareGroups(
+  pool: Dec,
+  carriers: Group[],
+  key: (g: Group) => Dec,
+  warnings: RollWarning[],
+  zeroKeyCode: RollWarning['code'] | null,
+): Map<Group, Dec> | null {
+  if (pool.isZero() || carriers.length === 0) return null;
+  let keyOf = key;
+  let total = carriers.reduce((t, g) => t.plus(keyOf(g)), ZERO);
+  if (total.isZero() && zeroKeyCode) {
+    warnings.push({ code: zeroKeyCode });
+    keyOf = (g) => g.goods;
+    total = carriers.reduce((t, g) => t.plus(keyOf(g)), ZERO);
+  }
+  const shares = new Map<Group, Dec>();
+  if (total.isZero()) {
+    const each = pool.div(carriers.reduce((n, g) => n + g.count, 0));
+    for (const g of carriers) shares.set(g, each.times(g.count));
+  } else {
+    const perKey = pool.div(total);
+    for (const g of carriers) shares.set(g, keyOf(g).times(perKey));
+  }
+  return shares;
 }
 
 /** The FX rows behind a roll, each once (per direction), by date then pair. */

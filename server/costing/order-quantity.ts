@@ -49,6 +49,8 @@ export interface OrderTerms {
   effectiveMoq: number;
   /** Prices as floats for ranking only (NaN where a float cannot stand in); filled on first use. */
   floats?: number[];
+  /** Prices in millionths as safe integers (NaN past 6 decimals or 2^53); filled on first use. */
+  micros?: number[];
 }
 
 /** The cheapest order for R without the excess figures: what ranking quotes needs. */
@@ -262,4 +264,23 @@ export function chooseOrder(terms: OrderTerms, required: number): OrderChoice {
   const o = orderSpend(terms, required);
   const excessQty = o.orderQty - required;
   return { required, ...o, excessQty, excessValue: o.unitPrice.times(excessQty) };
+}
+
+const PRICE_TEXT = /^\+?(\d*)(?:\.(\d*))?$/;
+
+/**
+ * Prices as whole millionths of the quote's currency: `numeric(18,6)` prices all fit, and
+ * Q × price is then an exact integer product. NaN for a price with more decimals (an
+ * engine caller may send any), which the caller then handles in decimal.js.
+ */
+export function microPrices(terms: OrderTerms): number[] {
+  if (terms.micros) return terms.micros;
+  return (terms.micros = terms.priceTexts.map((text) => {
+    const m = PRICE_TEXT.exec(text);
+    if (!m) return Number.NaN;
+    const frac = (m[2] ?? '').replace(/0+$/, '');
+    if (frac.length > 6) return Number.NaN;
+    const n = Number(`${m[1] || '0'}${frac.padEnd(6, '0')}`);
+    return Number.isSafeInteger(n) ? n : Number.NaN;
+  }));
 }

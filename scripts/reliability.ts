@@ -9,6 +9,7 @@ import { existsSync, readFileSync, writeFileSync, rmSync, mkdirSync } from 'node
 
 const sections: { file: string; section: string }[] = [
   { file: 'database-down', section: '2. PostgreSQL stopped while requests arrive' },
+  { file: 'reconnecting', section: '2. The client\'s "Reconnecting…" notice (Chromium)' },
   { file: 'interrupted-writes', section: '2. Import / bulk edit with its connection killed' },
   { file: 'mail-down', section: '2. Mail server down, mail queued' },
   { file: 'bad-input', section: '3. Generated bad input (every mutating route)' },
@@ -21,7 +22,7 @@ const sections: { file: string; section: string }[] = [
 mkdirSync('.data', { recursive: true });
 const report = '.data/reliability-report.json';
 rmSync(report, { force: true });
-const run = spawnSync('node_modules/.bin/vitest', ['run', 'tests/reliability', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`], { encoding: 'utf8', env: { ...process.env, NODE_ENV: 'test' } });
+const run = spawnSync('node_modules/.bin/vitest', ['run', 'tests/reliability', 'tests/browser/reconnecting.test.ts', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`], { encoding: 'utf8', env: { ...process.env, NODE_ENV: 'test' } });
 process.stdout.write(run.stdout ?? '');
 process.stderr.write(run.stderr ?? '');
 if (!existsSync(report)) {

@@ -1,7 +1,7 @@
 import type { Deps } from '../deps';
 import type { DbOrTrx } from '../db/knex';
 import { errors } from '../http/errors';
-import { costRoll, volumeCurve, shelfLadder, CostingInputError, type CostRollResult } from '../costing';
+import { costRoll, volumeCurve, shelfLadder, prepareCostRoll, rollPrepared, CostingInputError, type CostRollResult } from '../costing';
 import { today } from '../quotes/repository';
 import { loadCostingData, type CostingData } from './inputs';
 import { getBom, type BomRow } from './repository';
@@ -43,6 +43,23 @@ export async function costOf(db: DbOrTrx, workspaceId: string, bom: BomRow, qty?
       bom: { qty: qty ?? bom.plannedQty, date: d, reportingCurrency: bom.reportingCurrency, amortisationQty: bom.amortisationQty, targetUnitCost: bom.targetUnitCost },
     }),
   );
+  return decorate(data, result);
+}
+
+/**
+ * The cost roll's totals without its lines (the running panel): the same figures by the
+ * volume curve's totals-only roll, several times cheaper on a large BOM.
+ */
+export async function costTotalsOf(db: DbOrTrx, workspaceId: string, bom: BomRow, qty?: number, date?: string): Promise<CostView> {
+  const d = date ?? today();
+  const data = await loadCostingData(db, workspaceId, bom, d);
+  const result = engine(() => {
+    const prepared = prepareCostRoll({
+      ...data.input,
+      bom: { qty: qty ?? bom.plannedQty, date: d, reportingCurrency: bom.reportingCurrency, amortisationQty: bom.amortisationQty, targetUnitCost: bom.targetUnitCost },
+    });
+    return rollPrepared(prepared, qty ?? bom.plannedQty, { lines: false });
+  });
   return decorate(data, result);
 }
 

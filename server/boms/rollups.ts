@@ -3,7 +3,7 @@ import type { DbOrTrx } from '../db/knex';
 import type { Deps } from '../deps';
 import { scoped } from '../db/scope';
 import { today } from '../quotes/repository';
-import { costOf, type CostView } from './cost';
+import { costOf, costTotalsOf, type CostView } from './cost';
 import type { BomRow } from './repository';
 
 export const ROLLUP_QUEUE = 'cost-rollup';
@@ -101,6 +101,21 @@ export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow):
     .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'result');
   if (r?.result && isFresh(r, epoch, bom)) return r.result as CostView;
   return refreshRollup(deps.db, workspaceId, bom, epoch);
+}
+
+/**
+ * The totals at the planned quantity today, for the running panel: the stored roll-up
+ * without its lines when fresh, else the totals-only roll (not stored: the queued refresh
+ * stores the whole one).
+ */
+export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView> {
+  const epoch = await epochOf(deps.db, workspaceId);
+  const r = (await scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
+    .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`result - 'lines' AS result`))) as
+    | { epoch: string; costingDate: string; qty: number; result: CostView | null }
+    | undefined;
+  if (r?.result && isFresh(r, epoch, bom) && typeof r.result.lineWarningCount === 'number') return { ...r.result, lines: [] };
+  return costTotalsOf(deps.db, workspaceId, bom);
 }
 
 /** Queues one refresh of a workspace's stale roll-ups (at most one waiting per workspace). */

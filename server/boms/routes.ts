@@ -10,8 +10,8 @@ import { updateOrConflict } from '../db/versioned';
 import { audit } from '../audit/repository';
 import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
-import { costOf, curveOf, ladderOf } from './cost';
-import { rollupsFor, plannedCost } from './rollups';
+import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
+import { rollupsFor, plannedCost, plannedTotals } from './rollups';
 import { releaseGuards } from './release-guards';
 import { today } from '../quotes/repository';
 import { importBom } from './import';
@@ -178,8 +178,10 @@ export const bomRoutes: RouteDef[] = [
     handler: async ({ auth, params, query, deps }) => {
       const bom = await getBom(deps.db, auth.workspaceId, params.id);
       const planned = (query.qty === undefined || query.qty === bom.plannedQty) && (query.date === undefined || query.date === today());
-      const cost = planned ? await plannedCost(deps, auth.workspaceId, bom) : await costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
-      return query.view === 'totals' ? { ...cost, lines: [] } : cost;
+      if (query.view === 'totals') {
+        return planned ? plannedTotals(deps, auth.workspaceId, bom) : costTotalsOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
+      }
+      return planned ? plannedCost(deps, auth.workspaceId, bom) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
     },
   }),
   route({

@@ -752,6 +752,7 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines,
     leftOut: work.filter((w) => w.status === 'left_out'),
     dnp: work.filter((w) => w.status === 'dnp'),
+    lineWarningCount: work.reduce((n, w) => n + w.warnings.length, 0),
   });
 }
 
@@ -765,6 +766,7 @@ interface RollParts {
   lines: CostRollLine[];
   leftOut: Work[];
   dnp: Work[];
+  lineWarningCount: number;
 }
 
 interface SupplierSums {
@@ -851,6 +853,7 @@ function rollResult(p: PreparedCostRoll, N: Dec, amortiseOver: Dec, r: RollParts
     warnings,
     leftOut: { count: leftOutLines.length, lines: leftOutLines },
     dnp: { count: dnpIds.length, lineIds: dnpIds },
+    lineWarningCount: r.lineWarningCount,
     fxRates: usedRates(r.fxSeen),
   };
 }
@@ -914,6 +917,8 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
   const costWork: Work[] = [];
   const leftOut: Work[] = [];
   const dnp: Work[] = [];
+  // Lines in the integer path can only carry missing_pins; the others carry their own list.
+  let lineWarningCount = 0;
   const newWork = (pl: PreparedLine): Work => ({ pl, status: 'costed', warnings: [], category: pl.line.kind, assemblyPerUnit: ZERO, fxRows: [], assembly: ZERO, landed: ZERO });
 
   for (const pl of p.lines) {
@@ -924,6 +929,7 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
     const rank = pl.rank;
     if (pl.line.kind !== 'part') {
       const w = costCostLine(p, newWork(pl));
+      lineWarningCount += w.warnings.length;
       (w.status === 'left_out' ? leftOut : costWork).push(w);
       continue;
     }
@@ -949,12 +955,14 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
         if (p.assemblyRates.ok) {
           const a = (pl.assembly ??= lineAssembly(p.assemblyRates, pl.qtyPerUnit, rank.part));
           g.assemblyPerUnit = add(g.assemblyPerUnit, a.perUnit);
+          if (a.missingPins) lineWarningCount += 1;
         }
         continue;
       }
     }
     // Everything else line by line in decimal.js, as `rollPrepared` does, then into its group.
     const w = costPartLine(p, newWork(pl), buildQty, N, false);
+    lineWarningCount += w.warnings.length;
     if (w.status === 'left_out' || !w.chosen) {
       leftOut.push(w);
       continue;
@@ -1048,7 +1056,7 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
     w.landed = perUnit.times(N).plus(oneTime.times(N).div(amortiseOver));
     addLine(categorySums(w.category), w);
   }
-  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines: [], leftOut, dnp });
+  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines: [], leftOut, dnp, lineWarningCount });
 }
 
 /** `sharePool` for groups: a group's share is the sum of its lines' shares. */

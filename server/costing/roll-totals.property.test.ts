@@ -26,6 +26,7 @@ describe('totals-only roll (volume curve) agrees with the line-by-line roll', ()
         const full = rollPrepared(prepared, qty);
         const totalsOnly = rollPrepared(prepared, qty, { lines: false });
         expect(totalsOnly.lines).toEqual([]);
+        expect(full.lineWarningCount).toBe(full.lines.reduce((n, l) => n + l.warnings.length, 0));
         expect(point(totalsOnly)).toEqual(point(full));
       }),
       { numRuns: 300 },

@@ -389,6 +389,8 @@ export interface CostRollResult {
   warnings: RollWarning[];
   leftOut: { count: number; lines: LeftOutLine[] };
   dnp: { count: number; lineIds: string[] };
+  /** How many warnings the lines carry in all (known without the lines: the running panel). */
+  lineWarningCount: number;
   /** Every FX row used anywhere in the roll (for the export). */
   fxRates: FxRateUsed[];
 }

@@ -69,6 +69,17 @@ describe('BOMs, lines and the cost roll', () => {
     const cost = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).expect(200);
     expect(cost.body.leftOut.count).toBe(1);
     expect(cost.body.leftOut.lines[0].reason).toBe('no_quote');
+    // The running panel's read: the same totals and counts without the lines, at the
+    // planned quantity (stored roll-up or totals-only roll) and at another quantity.
+    for (const qty of [undefined, 777]) {
+      const full = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).query(qty ? { qty } : {}).expect(200);
+      const totals = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).query({ ...(qty ? { qty } : {}), view: 'totals' }).expect(200);
+      expect(totals.body.lines).toEqual([]);
+      expect(totals.body.totals).toEqual(full.body.totals);
+      expect(totals.body.leftOut).toEqual(full.body.leftOut);
+      expect(totals.body.lineWarningCount).toBe(full.body.lines.reduce((n: number, l: { warnings: unknown[] }) => n + l.warnings.length, 0));
+      expect(totals.body.lineWarningCount).toBeGreaterThan(0);
+    }
   });
 
   it('bulk edits apply in one transaction: one stale version and nothing changes', async () => {

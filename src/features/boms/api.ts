@@ -129,6 +129,8 @@ export type CostRoll = {
   warnings: Warning[];
   leftOut: { count: number; lines: LeftOutLine[] };
   dnp?: { count: number; lineIds: string[] };
+  /** Warnings on the lines in all (also when the lines are left out of the answer). */
+  lineWarningCount: number;
 };
 
 export type CurvePoint = Omit<CostRoll, 'lines' | 'profileId' | 'profileName'>;
@@ -262,6 +264,13 @@ export const costQueryOptions = (id: string, params: CostParams = {}) =>
   queryOptions({
     queryKey: bomKeys.cost(id, params),
     queryFn: ({ signal }) => api.get<CostRoll>(`/api/boms/${enc(id)}/cost`, { query: { qty: params.qty, date: params.date }, signal }),
+  });
+
+/** The totals without the lines (`view=totals`): what the running panel shows, cheap on a large BOM. */
+export const costTotalsQueryOptions = (id: string, qty: number) =>
+  queryOptions({
+    queryKey: [...bomKeys.costs(id), 'totals', { qty }] as const,
+    queryFn: ({ signal }) => api.get<CostRoll>(`/api/boms/${enc(id)}/cost`, { query: { qty, view: 'totals' }, signal }),
   });
 
 /** `quantities` is the comma-separated list as typed, or '' for the server's default twelve. */

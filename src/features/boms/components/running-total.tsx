@@ -3,21 +3,21 @@ import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { Spinner } from '../../../components/ui/spinner';
 import { describeError } from '../../../components/ui/error-state';
-import { costQueryOptions, type Bom } from '../api';
+import { costTotalsQueryOptions, type Bom } from '../api';
 import { formatCount, formatPerUnit } from '../display';
 import { GapFigure } from './gap-figure';
 
 /**
  * The right-hand panel of the BOM page: landed cost per unit at the planned quantity,
- * target and gap, lines left out and warnings. It reads the same cost query the Cost
- * roll tab reads at the planned quantity; every line save invalidates it, so it follows
- * the grid while you edit. `stress` is the stress tally, composed in by the page (it
+ * target and gap, lines left out and warnings. It reads the cost roll's totals only (no
+ * lines: a fraction of the work on a large BOM); every line save invalidates it, so it
+ * follows the grid while you edit. `stress` is the stress tally, composed in by the page (it
  * belongs to the stress area).
  */
 export function RunningTotal({ bom, stress }: { bom: Bom; stress?: ReactNode }) {
-  const cost = useQuery({ ...costQueryOptions(bom.id, { qty: bom.plannedQty }), placeholderData: keepPreviousData });
+  const cost = useQuery({ ...costTotalsQueryOptions(bom.id, bom.plannedQty), placeholderData: keepPreviousData });
   const data = cost.data;
-  const warnings = data ? data.warnings.length + data.lines.reduce((n, line) => n + line.warnings.length, 0) : null;
+  const warnings = data ? data.warnings.length + data.lineWarningCount : null;
 
   return (
     <section aria-label="Running total" className="flex flex-col gap-4 rounded-lg border border-rule bg-surface p-4 text-sm">

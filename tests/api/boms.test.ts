@@ -190,6 +190,18 @@ describe('the stored roll-up', () => {
       .toMatchObject({ landedPerUnit: '0.0120000000', fresh: true });
     const fresh = await t.database.db('cost_rollups').where({ bomId: bom.id }).first();
     expect(fresh.result.totals.landedPerUnit).toBe('0.0120000000');
+
+    // A note changes no cost: the costing epoch stays and the roll-up stays fresh. A
+    // quantity does: the epoch moves and the refresh follows.
+    const epoch = async () => String((await t.database.db('workspaces').where({ id: fresh.workspaceId }).first('costingEpoch')).costingEpoch);
+    const line = (await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).expect(200)).body.items[0];
+    const before = await epoch();
+    const noted = await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ version: line.version, note: 'reel from stock' }).expect(200);
+    expect(await epoch()).toBe(before);
+    await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ version: noted.body.version, qtyPerUnit: '2' }).expect(200);
+    expect(await epoch()).not.toBe(before);
+    await expect.poll(async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id).cost, { timeout: 10_000 })
+      .toMatchObject({ landedPerUnit: '0.0240000000', fresh: true });
   });
 
   it('snapshots and revisions compare per line and in totals', async () => {

@@ -45,7 +45,9 @@ async function main() {
 
   const sink = await startMailSink();
   const s3 = await startS3Fake({ directory: '.data/s3-load', bucket: 'farthing' });
-  const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  // LOAD_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=.data/profiles", profiles the server under load.
+  const nodeArgs = (process.env.LOAD_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const server = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
     env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: url, PORT: String(port), PUBLIC_URL: base, SESSION_SECRET: 'load-test-secret-0123456789', SMTP_PORT: String(sink.smtpPort), S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, SERVE_CLIENT: 'false', LOG_LEVEL: 'error', RATE_LIMIT_AUTH_PER_MINUTE: '1000' },
     stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
   });

@@ -10,7 +10,8 @@ import { assertAllowed } from '../billing/plan';
  * veto on release, and (with plans) the limit on creating BOMs.
  */
 export const releaseGuards = {
-  tallies: (deps: Deps, workspaceId: string, boms: BomRow[]) => stressTallies(deps.db, workspaceId, boms),
+  /** The stress tally of one BOM (stored with its roll-up); null without a stress policy. */
+  tally: async (db: DbOrTrx, workspaceId: string, bom: BomRow) => (await stressTallies(db, workspaceId, [bom])).get(bom.id) ?? null,
   beforeRelease: (trx: Trx, deps: Deps, auth: Auth, bom: BomRow) => assertReleasable(trx, deps, auth, bom),
   beforeCreate: (db: DbOrTrx, deps: Deps, auth: Auth) => assertAllowed(db, auth.workspaceId, deps.config.BILLING_GRACE_DAYS, 'boms'),
 };

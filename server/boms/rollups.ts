@@ -5,6 +5,10 @@ import { scoped } from '../db/scope';
 import { today } from '../quotes/repository';
 import { costOf, costTotalsOf, type CostView } from './cost';
 import type { BomRow } from './repository';
+import { releaseGuards } from './release-guards';
+
+/** The stress tally kept with a roll-up (`tally` null: the workspace has no stress policy). */
+export type StoredStress = { tally: Awaited<ReturnType<typeof releaseGuards.tally>> };
 
 export const ROLLUP_QUEUE = 'cost-rollup';
 
@@ -20,13 +24,16 @@ export interface RollupRow {
   leftOut: number;
   warnings: number;
   totals: unknown;
+  /** Null on a roll-up stored before tallies were kept. */
+  stress: StoredStress | null;
   computedAt?: Date;
 }
 
 /**
- * The stored cost roll of each BOM at its planned quantity and today's date. It is fresh
- * while the workspace's costing epoch (bumped by triggers on every input: lines, parts,
- * quotes, price breaks, suppliers, rates, profiles, BOMs) and the date and quantity still
+ * The stored cost roll of each BOM at its planned quantity and today's date, with its
+ * stress tally. It is fresh while the workspace's costing epoch (bumped by triggers on
+ * every input: lines, parts, quotes, price breaks, suppliers, rates, profiles, BOMs,
+ * stress policies; a line's note is not an input) and the date and quantity still
  * match. Reads never wait for a recompute once a roll-up exists: a stale one is served
  * marked `fresh: false` and a refresh is queued; writes queue a refresh too.
  */
@@ -39,24 +46,29 @@ const isFresh = (r: { epoch: string; costingDate: string; qty: number } | undefi
   Boolean(r && String(r.epoch) === epoch && r.costingDate === today() && r.qty === bom.plannedQty);
 
 // Concurrent requests for the same roll in this process share one computation.
-const inFlight = new Map<string, Promise<CostView>>();
+const inFlight = new Map<string, Promise<{ cost: CostView; stress: StoredStress }>>();
 
-/** Computes and stores the roll-up of one BOM (the whole result and its totals). */
+/** Computes and stores the roll-up of one BOM (the whole result, its totals and its stress tally). */
 export async function refreshRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?: string): Promise<CostView> {
+  return (await computeRollup(db, workspaceId, bom, epoch)).cost;
+}
+
+async function computeRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?: string): Promise<{ cost: CostView; stress: StoredStress }> {
   const e = epoch ?? (await epochOf(db, workspaceId));
   const key = `${workspaceId}:${bom.id}:${e}:${bom.plannedQty}:${today()}`;
   const running = inFlight.get(key);
   if (running) return running;
   const work = (async () => {
-    const cost = await costOf(db, workspaceId, bom);
+    const [cost, tally] = await Promise.all([costOf(db, workspaceId, bom), releaseGuards.tally(db, workspaceId, bom)]);
+    const stress: StoredStress = { tally };
     const row = {
       bomId: bom.id, workspaceId, epoch: e, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency,
       landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
-      warnings: cost.warnings.length + cost.lines.reduce((n, l) => n + l.warnings.length, 0),
-      totals: JSON.stringify(cost.totals), result: JSON.stringify(cost), computedAt: db.fn.now(),
+      warnings: cost.warnings.length + cost.lineWarningCount,
+      totals: JSON.stringify(cost.totals), result: JSON.stringify(cost), stress: JSON.stringify(stress), computedAt: db.fn.now(),
     };
     await db('cost_rollups').insert(row).onConflict('bom_id').merge();
-    return cost;
+    return { cost, stress };
   })();
   inFlight.set(key, work);
   try {
@@ -71,23 +83,25 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   const epoch = await epochOf(deps.db, workspaceId);
   const stored = boms.length
     ? ((await scoped(deps.db, 'cost_rollups', workspaceId).andWhereRaw('bom_id = ANY(?::bigint[])', [boms.map((b) => b.id)])
-      .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'computedAt')) as RollupRow[])
+      .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'stress', 'computedAt')) as RollupRow[])
     : [];
   const byBom = new Map(stored.map((r) => [r.bomId, r]));
   const out = new Map<string, RollupRow & { fresh: boolean }>();
   let stale = false;
   for (const bom of boms) {
     const r = byBom.get(bom.id);
-    if (r) {
+    // A stored roll-up is served even when stale (and refreshed behind); one that never
+    // existed, or that was stored before tallies were kept, is computed now.
+    if (r && r.stress) {
       const fresh = isFresh(r, epoch, bom);
       stale ||= !fresh;
       out.set(bom.id, { ...r, fresh });
       continue;
     }
-    const cost = await refreshRollup(deps.db, workspaceId, bom, epoch);
+    const { cost, stress } = await computeRollup(deps.db, workspaceId, bom, epoch);
     out.set(bom.id, {
       bomId: bom.id, workspaceId, epoch, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency, landedPerUnit: cost.totals.landedPerUnit,
-      targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count, warnings: cost.warnings.length, totals: cost.totals, fresh: true,
+      targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count, warnings: cost.warnings.length + cost.lineWarningCount, totals: cost.totals, stress, fresh: true,
     });
   }
   if (stale) await queueRefresh(deps, workspaceId);

@@ -36,7 +36,6 @@ export const bomRoutes: RouteDef[] = [
       const rollups = await rollupsFor(deps, auth.workspaceId, boms);
       const counts = (await scoped(deps.db, 'bom_lines', auth.workspaceId).groupBy('bomId').select('bomId').count('* as n')) as { bomId: string; n: string }[];
       const lineCount = new Map(counts.map((c) => [c.bomId, Number(c.n)]));
-      const tallies = await releaseGuards.tallies(deps, auth.workspaceId, boms);
       return {
         items: boms.map((b) => {
           const r = rollups.get(b.id);
@@ -44,7 +43,7 @@ export const bomRoutes: RouteDef[] = [
             ...bomView(b),
             lineCount: lineCount.get(b.id) ?? 0,
             cost: r ? { qty: r.qty, currency: r.currency, landedPerUnit: r.landedPerUnit, leftOut: r.leftOut, warnings: r.warnings, costingDate: r.costingDate, fresh: r.fresh } : null,
-            stress: tallies.get(b.id) ?? null,
+            stress: r?.stress?.tally ?? null,
           };
         }),
         nextCursor: null,

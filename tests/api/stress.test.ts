@@ -53,6 +53,10 @@ describe('the stress check', () => {
     const chip = (await d.get(`/api/boms/${bomId}/lines`)).body.items.find((l: { id: string }) => l.id === chipLine.id);
     // 250 V on the 200 V chip: over its rating.
     const hot = await d.patch(`/api/boms/${bomId}/lines/${chip.id}`).send({ operatingPoint: { voltageV: '250V' }, version: chip.version }).expect(200);
+    // The BOM list's tally is stored with the roll-up; an operating point is a stress input,
+    // so the stored tally follows it (refreshed behind the edit).
+    await expect.poll(async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bomId), { timeout: 10_000 })
+      .toMatchObject({ stress: { clear: 0, close: 0, beyondPolicy: 1, overRating: 1, needsData: 0 }, cost: { fresh: true } });
     await d.post(`/api/boms/${bomId}/state`).send({ state: 'in_review' }).expect(200);
     const blocked = await ws.agents.owner.post(`/api/boms/${bomId}/state`).send({ state: 'released' }).expect(409);
     expect(blocked.body.error.message).toMatch(/absolute rating/);

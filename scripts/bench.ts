@@ -87,6 +87,9 @@ async function main() {
     const deps = { db } as unknown as Deps;
     for (const size of sizes) {
       const { workspaceId, bomId } = await generate(db, size);
+      // Planner statistics as autovacuum would have them on a live database: without them
+      // the timings depend on whether its analyze happened to run mid-benchmark.
+      await db.raw('ANALYZE');
       const bom = await getBom(db, workspaceId, bomId);
       await costOf(db, workspaceId, bom); // warm-up
       await bareSelect(db, workspaceId, bomId);

@@ -1,6 +1,7 @@
 /**
  * `npm run reliability`: the fault, bad-input, concurrency, upload-abuse, session and
- * two-server suites (tests/reliability), then a summary table; the README's Reliability
+ * two-server suites (tests/reliability) and the browser test of the "Reconnecting…" notice,
+ * then a summary table; the README's Reliability
  * section is rewritten with it (dated), with the last `npm run bench:load` figures when
  * there are any.
  */

@@ -592,36 +592,69 @@ function addSums(into: Sums, s: Sums): void {
   into.count += s.count;
 }
 
+/** What sharing the per-shipment pools needs of a line (full roll) or a group of lines (totals only). */
+interface PoolCarrier {
+  incoterm: Incoterm;
+  goods: Dec;
+  /** Freight-carrying weight (freight by weight only). */
+  weight: Dec;
+  /** Lines it stands for: an equal share is per line. */
+  count: number;
+}
+
 /**
- * Shares a per-build pool over the carrying lines in proportion to a key (goods value or
+ * Shares a per-build pool over the carriers in proportion to a key (goods value or
  * weight). Returns null when there is nothing to share. A zero key total falls back to
- * goods value, then to equal shares, so the pool is never dropped silently.
+ * goods value, then to equal shares per line, so the pool is never dropped silently.
  */
-function sharePool(
+function sharePool<T>(
   pool: Dec,
-  carriers: Work[],
-  key: (w: Work) => Dec,
+  carriers: T[],
+  view: (c: T) => PoolCarrier,
+  byWeight: boolean,
   warnings: RollWarning[],
-  zeroKeyCode: RollWarning['code'] | null,
-): Map<Work, Dec> | null {
+): Map<T, Dec> | null {
   if (pool.isZero() || carriers.length === 0) return null;
-  let keyOf = key;
-  let total = carriers.reduce((t, w) => t.plus(keyOf(w)), ZERO);
-  if (total.isZero() && zeroKeyCode) {
-    warnings.push({ code: zeroKeyCode });
-    keyOf = (w) => w.goods!;
-    total = carriers.reduce((t, w) => t.plus(keyOf(w)), ZERO);
+  let keyOf = byWeight ? (c: T) => view(c).weight : (c: T) => view(c).goods;
+  let total = carriers.reduce((t, c) => t.plus(keyOf(c)), ZERO);
+  if (total.isZero() && byWeight) {
+    warnings.push({ code: 'freight_weight_zero' });
+    keyOf = (c) => view(c).goods;
+    total = carriers.reduce((t, c) => t.plus(keyOf(c)), ZERO);
   }
-  const shares = new Map<Work, Dec>();
+  const shares = new Map<T, Dec>();
   if (total.isZero()) {
-    const each = pool.div(carriers.length);
-    for (const w of carriers) shares.set(w, each);
+    const each = pool.div(carriers.reduce((n, c) => n + view(c).count, 0));
+    for (const c of carriers) shares.set(c, view(c).count === 1 ? each : each.times(view(c).count));
   } else {
-    // One division for the pool, one multiplication per line.
+    // One division for the pool, one multiplication per carrier.
     const perKey = pool.div(total);
-    for (const w of carriers) shares.set(w, keyOf(w).times(perKey));
+    for (const c of carriers) shares.set(c, keyOf(c).times(perKey));
   }
   return shares;
+}
+
+/**
+ * The per-shipment freight and fees shared over the carriers whose Incoterm carries them,
+ * the warnings when nothing carries them, and the FX rows of the pools and assembly rates.
+ */
+function shareBuildPools<T>(p: PreparedCostRoll, items: T[], view: (c: T) => PoolCarrier, warnings: RollWarning[]) {
+  const freightCarriers = items.filter((c) => needsAdder(view(c).incoterm, 'freight'));
+  const feeCarriers = items.filter((c) => needsAdder(view(c).incoterm, 'fees'));
+  const freight = p.freightPool.ok ? sharePool(p.freightPool.value, freightCarriers, view, p.byWeight, warnings) : null;
+  const fees = p.feesPool.ok ? sharePool(p.feesPool.value, feeCarriers, view, false, warnings) : null;
+  if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
+    warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
+  }
+  if (p.feesPool.ok && !p.feesPool.value.isZero() && feeCarriers.length === 0) {
+    warnings.push({ code: 'fees_unallocated', detail: 'no chosen quote has an Incoterm that carries fees' });
+  }
+  // Rows come from cached lookups, so the same few objects recur on every line.
+  const fxSeen = new Set<FxRateUsed>();
+  if (p.freightPool.ok && freight) for (const r of p.freightPool.rows) fxSeen.add(r);
+  if (p.feesPool.ok && fees) for (const r of p.feesPool.rows) fxSeen.add(r);
+  if (p.assemblyRates.ok) for (const r of p.assemblyRates.rows) fxSeen.add(r);
+  return { freight, fees, fxSeen };
 }
 
 export interface RollOptions {
@@ -670,38 +703,20 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   });
 
   const partLines = work.filter((w) => w.status === 'costed' && w.chosen);
-  const freightCarriers = partLines.filter((w) => needsAdder(w.chosen!.pq.incoterm, 'freight'));
-  const feeCarriers = partLines.filter((w) => needsAdder(w.chosen!.pq.incoterm, 'fees'));
-  const byWeight = p.byWeight;
-  const freightShares = p.freightPool.ok
-    ? sharePool(
-        p.freightPool.value,
-        freightCarriers,
-        byWeight ? (w) => w.weight ?? ZERO : (w) => w.goods!,
-        warnings,
-        byWeight ? 'freight_weight_zero' : null,
-      )
-    : null;
-  const feeShares = p.feesPool.ok ? sharePool(p.feesPool.value, feeCarriers, (w) => w.goods!, warnings, null) : null;
-  if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
-    warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
-  }
-  if (p.feesPool.ok && !p.feesPool.value.isZero() && feeCarriers.length === 0) {
-    warnings.push({ code: 'fees_unallocated', detail: 'no chosen quote has an Incoterm that carries fees' });
-  }
+  const { freight: freightShares, fees: feeShares, fxSeen } = shareBuildPools(
+    p,
+    partLines,
+    (w) => ({ incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 }),
+    warnings,
+  );
 
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
   const byCategory = new Map<string, Sums>();
   const bySupplier = new Map<string, SupplierSums>();
-  // Rows come from cached lookups, so the same few objects recur on every line.
-  const fxSeen = new Set<FxRateUsed>();
   const noteFx = (rows: FxRateUsed[]) => {
     for (const r of rows) fxSeen.add(r);
   };
-  if (p.freightPool.ok && freightShares) noteFx(p.freightPool.rows);
-  if (p.feesPool.ok && feeShares) noteFx(p.feesPool.rows);
-  if (p.assemblyRates.ok) noteFx(p.assemblyRates.rows);
 
   for (const w of work) {
     if (w.status !== 'costed') continue;
@@ -982,31 +997,15 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
     const inQuote = micros(g.goodsMicro, g.goodsBig);
     g.goods = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.goodsDec);
   }
-  const freightCarriers = all.filter((g) => needsAdder(g.incoterm, 'freight'));
-  const feeCarriers = all.filter((g) => needsAdder(g.incoterm, 'fees'));
-  const byWeight = p.byWeight;
-  const freightShares = p.freightPool.ok
-    ? shareGroups(p.freightPool.value, freightCarriers, byWeight ? (g) => g.weight : (g) => g.goods, warnings, byWeight ? 'freight_weight_zero' : null)
-    : null;
-  const feeShares = p.feesPool.ok ? shareGroups(p.feesPool.value, feeCarriers, (g) => g.goods, warnings, null) : null;
-  if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
-    warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
-  }
-  if (p.feesPool.ok && !p.feesPool.value.isZero() && feeCarriers.length === 0) {
-    warnings.push({ code: 'fees_unallocated', detail: 'no chosen quote has an Incoterm that carries fees' });
-  }
+  const { freight: freightShares, fees: feeShares, fxSeen } = shareBuildPools(p, all, (g) => g, warnings);
 
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
   const byCategory = new Map<string, Sums>();
   const bySupplier = new Map<string, SupplierSums>();
-  const fxSeen = new Set<FxRateUsed>();
   const noteFx = (rows: FxRateUsed[]) => {
     for (const r of rows) fxSeen.add(r);
   };
-  if (p.freightPool.ok && freightShares) noteFx(p.freightPool.rows);
-  if (p.feesPool.ok && feeShares) noteFx(p.feesPool.rows);
-  if (p.assemblyRates.ok) noteFx(p.assemblyRates.rows);
   const categorySums = (category: string) => {
     let c = byCategory.get(category);
     if (!c) byCategory.set(category, (c = emptySums()));
@@ -1057,33 +1056,6 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
     addLine(categorySums(w.category), w);
   }
   return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines: [], leftOut, dnp, lineWarningCount });
-}
-
-/** `sharePool` for groups: a group's share is the sum of its lines' shares. */
-function shareGroups(
-  pool: Dec,
-  carriers: Group[],
-  key: (g: Group) => Dec,
-  warnings: RollWarning[],
-  zeroKeyCode: RollWarning['code'] | null,
-): Map<Group, Dec> | null {
-  if (pool.isZero() || carriers.length === 0) return null;
-  let keyOf = key;
-  let total = carriers.reduce((t, g) => t.plus(keyOf(g)), ZERO);
-  if (total.isZero() && zeroKeyCode) {
-    warnings.push({ code: zeroKeyCode });
-    keyOf = (g) => g.goods;
-    total = carriers.reduce((t, g) => t.plus(keyOf(g)), ZERO);
-  }
-  const shares = new Map<Group, Dec>();
-  if (total.isZero()) {
-    const each = pool.div(carriers.reduce((n, g) => n + g.count, 0));
-    for (const g of carriers) shares.set(g, each.times(g.count));
-  } else {
-    const perKey = pool.div(total);
-    for (const g of carriers) shares.set(g, keyOf(g).times(perKey));
-  }
-  return shares;
 }
 
 /** The FX rows behind a roll, each once (per direction), by date then pair. */

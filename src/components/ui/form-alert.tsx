@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { STALE_VERSION_MESSAGE } from '../../lib/stale-version';
 
 type Tone = 'error' | 'info' | 'success';
 
@@ -17,5 +18,20 @@ export function FormAlert({ tone = 'error', children }: { tone?: Tone; children:
     <div role={tone === 'error' ? 'alert' : 'status'} className={`rounded-md border px-3 py-2 text-sm ${tones[tone]}`}>
       {children}
     </div>
+  );
+}
+
+/**
+ * The 409 notice of an edit form: someone saved this record meanwhile. "Reload" puts the
+ * saved values back in the form and takes their version, so the next save is not stale.
+ */
+export function StaleVersionAlert({ onReload }: { onReload: () => void }) {
+  return (
+    <FormAlert>
+      {STALE_VERSION_MESSAGE}{' '}
+      <button type="button" className="font-medium underline" onClick={onReload}>
+        Reload
+      </button>
+    </FormAlert>
   );
 }

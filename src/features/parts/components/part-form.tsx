@@ -3,9 +3,9 @@ import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { partCategories, mounts } from '../../../shared/schemas/trade';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { isStaleVersion, STALE_VERSION_MESSAGE } from '../../../lib/stale-version';
+import { isStaleVersion } from '../../../lib/stale-version';
 import { Button } from '../../../components/ui/button';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { FormAlert, StaleVersionAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { TextareaField } from '../../../components/ui/textarea-field';
@@ -74,20 +74,13 @@ export function PartForm({ part, onDone, onCancel }: { part?: Part; onDone: (par
     <form onSubmit={onSubmit} noValidate aria-label={part ? `Edit ${part.internalPn}` : 'New part'} className="flex flex-col gap-4">
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       {stale && part ? (
-        <FormAlert>
-          {STALE_VERSION_MESSAGE}{' '}
-          <button
-            type="button"
-            className="font-medium underline"
-            onClick={() => {
-              reset(partFormValues(part));
-              setBaseVersion(part.version);
-              setStale(false);
-            }}
-          >
-            Reload
-          </button>
-        </FormAlert>
+        <StaleVersionAlert
+          onReload={() => {
+            reset(partFormValues(part));
+            setBaseVersion(part.version);
+            setStale(false);
+          }}
+        />
       ) : null}
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField label="Internal PN" autoComplete="off" error={errors.internalPn?.message} {...register('internalPn')} />

@@ -3,10 +3,10 @@ import { useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { partCategories, type PartCategory } from '../../../shared/schemas/trade';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { isStaleVersion, STALE_VERSION_MESSAGE } from '../../../lib/stale-version';
+import { isStaleVersion } from '../../../lib/stale-version';
 import { Button } from '../../../components/ui/button';
 import { CurrencyField } from '../../../components/ui/currency-field';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { FormAlert, StaleVersionAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { TextareaField } from '../../../components/ui/textarea-field';
@@ -205,20 +205,13 @@ export function ProfileForm({
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       {saved ? <FormAlert tone="success">Profile saved.</FormAlert> : null}
       {stale && profile ? (
-        <FormAlert>
-          {STALE_VERSION_MESSAGE}{' '}
-          <button
-            type="button"
-            className="font-medium underline"
-            onClick={() => {
-              reset(profileFormValues(profile));
-              setBaseVersion(profile.version);
-              setStale(false);
-            }}
-          >
-            Reload
-          </button>
-        </FormAlert>
+        <StaleVersionAlert
+          onReload={() => {
+            reset(profileFormValues(profile));
+            setBaseVersion(profile.version);
+            setStale(false);
+          }}
+        />
       ) : null}
       <fieldset disabled={readOnly} className="flex flex-col gap-4">
         <div className="grid gap-3 sm:grid-cols-[1fr_auto]">

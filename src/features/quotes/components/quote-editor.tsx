@@ -2,11 +2,11 @@ import { useMemo, useState } from 'react';
 import { useForm, useWatch, type UseFormRegister } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { isStaleVersion, STALE_VERSION_MESSAGE } from '../../../lib/stale-version';
+import { isStaleVersion } from '../../../lib/stale-version';
 import { incotermOptions } from '../../../lib/trade-labels';
 import { Button } from '../../../components/ui/button';
 import { CurrencyField } from '../../../components/ui/currency-field';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { FormAlert, StaleVersionAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { TextareaField } from '../../../components/ui/textarea-field';
@@ -130,20 +130,13 @@ export function QuoteEditor({
     <form onSubmit={onSubmit} noValidate aria-label={quote ? 'Edit quote' : 'Add quote'} className="flex flex-col gap-4">
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       {stale && quote ? (
-        <FormAlert>
-          {STALE_VERSION_MESSAGE}{' '}
-          <button
-            type="button"
-            className="font-medium underline"
-            onClick={() => {
-              reset(quoteFormValues(quote));
-              setBaseVersion(quote.version);
-              setStale(false);
-            }}
-          >
-            Reload
-          </button>
-        </FormAlert>
+        <StaleVersionAlert
+          onReload={() => {
+            reset(quoteFormValues(quote));
+            setBaseVersion(quote.version);
+            setStale(false);
+          }}
+        />
       ) : null}
 
       {partId || quote ? (

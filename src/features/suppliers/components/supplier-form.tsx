@@ -2,12 +2,12 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { isStaleVersion, STALE_VERSION_MESSAGE } from '../../../lib/stale-version';
+import { isStaleVersion } from '../../../lib/stale-version';
 import { incotermOptions } from '../../../lib/trade-labels';
 import { Button } from '../../../components/ui/button';
 import { CheckboxField } from '../../../components/ui/checkbox-field';
 import { CurrencyField } from '../../../components/ui/currency-field';
-import { FormAlert } from '../../../components/ui/form-alert';
+import { FormAlert, StaleVersionAlert } from '../../../components/ui/form-alert';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { TextareaField } from '../../../components/ui/textarea-field';
@@ -56,20 +56,13 @@ export function SupplierForm({ supplier, onDone, onCancel }: { supplier?: Suppli
     <form onSubmit={onSubmit} noValidate aria-label={supplier ? `Edit ${supplier.name}` : 'New supplier'} className="flex flex-col gap-4">
       {formError ? <FormAlert>{formError}</FormAlert> : null}
       {stale && supplier ? (
-        <FormAlert>
-          {STALE_VERSION_MESSAGE}{' '}
-          <button
-            type="button"
-            className="font-medium underline"
-            onClick={() => {
-              reset(supplierFormValues(supplier));
-              setBaseVersion(supplier.version);
-              setStale(false);
-            }}
-          >
-            Reload
-          </button>
-        </FormAlert>
+        <StaleVersionAlert
+          onReload={() => {
+            reset(supplierFormValues(supplier));
+            setBaseVersion(supplier.version);
+            setStale(false);
+          }}
+        />
       ) : null}
       <TextField label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
       <div className="grid gap-3 sm:grid-cols-3">

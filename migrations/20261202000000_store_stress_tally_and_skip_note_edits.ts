@@ -20,6 +20,17 @@ const policyEvents = [
 
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.alterTable('cost_rollups', (t) => t.jsonb('stress'));
+  // BOMs without a policy of their own are checked against the workspace default.
+  await knex.raw(`
+    CREATE FUNCTION bump_costing_epoch_for_default_policy() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      IF NEW.default_stress_policy_id IS DISTINCT FROM OLD.default_stress_policy_id THEN
+        NEW.costing_epoch := NEW.costing_epoch + 1;
+      END IF;
+      RETURN NEW;
+    END $$`);
+  await knex.raw(`CREATE TRIGGER workspaces_default_policy_costing BEFORE UPDATE OF default_stress_policy_id ON workspaces
+    FOR EACH ROW EXECUTE FUNCTION bump_costing_epoch_for_default_policy()`);
   for (const [event, ref] of policyEvents) {
     await knex.raw(`CREATE TRIGGER stress_policies_costing_${event.toLowerCase()} AFTER ${event} ON stress_policies
       REFERENCING ${ref} FOR EACH STATEMENT EXECUTE FUNCTION bump_costing_epoch()`);
@@ -40,6 +51,8 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
+  await knex.raw('DROP TRIGGER workspaces_default_policy_costing ON workspaces');
+  await knex.raw('DROP FUNCTION bump_costing_epoch_for_default_policy()');
   for (const [event] of policyEvents) await knex.raw(`DROP TRIGGER stress_policies_costing_${event.toLowerCase()} ON stress_policies`);
   await knex.schema.alterTable('cost_rollups', (t) => t.dropColumn('stress'));
   await knex.raw('DROP TRIGGER bom_lines_costing_update ON bom_lines');

@@ -113,14 +113,15 @@ export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow):
   const epoch = await epochOf(deps.db, workspaceId);
   const r = await scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
     .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'result');
-  if (r?.result && isFresh(r, epoch, bom)) return r.result as CostView;
+  // A result stored before `lineWarningCount` existed is computed again.
+  if (r?.result && isFresh(r, epoch, bom) && typeof (r.result as CostView).lineWarningCount === 'number') return r.result as CostView;
   return refreshRollup(deps.db, workspaceId, bom, epoch);
 }
 
 /**
  * The totals at the planned quantity today, for the running panel: the stored roll-up
- * without its lines when fresh, else the totals-only roll (not stored: the queued refresh
- * stores the whole one).
+ * without its lines when fresh, else the totals-only roll (not stored: the refresh it
+ * queues stores the whole one).
  */
 export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView> {
   const epoch = await epochOf(deps.db, workspaceId);
@@ -129,6 +130,7 @@ export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow
     | { epoch: string; costingDate: string; qty: number; result: CostView | null }
     | undefined;
   if (r?.result && isFresh(r, epoch, bom) && typeof r.result.lineWarningCount === 'number') return { ...r.result, lines: [] };
+  await queueRefresh(deps, workspaceId);
   return costTotalsOf(deps.db, workspaceId, bom);
 }
 

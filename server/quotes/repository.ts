@@ -58,9 +58,10 @@ export async function writeBreaks(db: DbOrTrx, workspaceId: string, quoteId: str
 
 /**
  * The quotes of some parts as the costing engine takes them, for a cost roll of a large
- * BOM: only the fields it uses, the part ids as one array (given, or a BOM's), the breaks as one
- * "minQty price minQty price …" text per quote (a fifth of the rows and no array parsing),
- * and createdAt already as ISO text. Two queries, side by side when not in a transaction.
+ * BOM: only the fields it uses, the part ids as one array (given, or a BOM's), the breaks
+ * as one "minQty price minQty price …" text per quote (no row per break, no array parsing)
+ * read in the same query, so a quote never arrives without the breaks it was saved with,
+ * and createdAt already as ISO text.
  */
 export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: string[] | { bomId: string }): Promise<CostingQuote[]> {
   if (Array.isArray(parts) && !parts.length) return [];
@@ -68,25 +69,22 @@ export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: 
   // array parameter; an IN (subquery) here was planned as a nested loop of 40,000²).
   const ids = Array.isArray(parts) ? '?::bigint[]' : 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
   const idParams = Array.isArray(parts) ? [parts] : [workspaceId, parts.bomId];
-  const quotesSql = `SELECT id, part_id, supplier_id, currency, incoterm, moq, order_multiple, lead_time_days, valid_from, valid_until,
-           to_char(created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS created_at
-      FROM quotes WHERE workspace_id = ? AND part_id = ANY(${ids}) ORDER BY id`;
-  const breaksSql = `SELECT pb.quote_id, string_agg(pb.min_qty || ' ' || pb.unit_price, ' ' ORDER BY pb.min_qty) AS breaks
-      FROM price_breaks pb JOIN quotes q ON q.id = pb.quote_id AND q.workspace_id = pb.workspace_id
-     WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) GROUP BY pb.quote_id`;
-  const read = (sql: string) => db.raw(sql, [workspaceId, ...idParams]) as unknown as Promise<{ rows: Record<string, string>[] }>;
-  const inTransaction = (db as { isTransaction?: boolean }).isTransaction;
-  const [quotes, breaks] = inTransaction ? [await read(quotesSql), await read(breaksSql)] : await Promise.all([read(quotesSql), read(breaksSql)]);
-  const byQuote = new Map<string, CostingQuote['priceBreaks']>();
-  for (const r of breaks.rows) {
-    const parts = r.breaks.split(' ');
-    const list: CostingQuote['priceBreaks'] = [];
-    for (let i = 0; i < parts.length; i += 2) list.push({ minQty: Number(parts[i]), unitPrice: parts[i + 1] });
-    byQuote.set(r.quoteId, list);
-  }
-  return quotes.rows.map((q) => ({
-    id: q.id, partId: q.partId, supplierId: q.supplierId, currency: q.currency, incoterm: q.incoterm as CostingQuote['incoterm'],
-    moq: Number(q.moq), orderMultiple: Number(q.orderMultiple), leadTimeDays: q.leadTimeDays as unknown as number | null,
-    validFrom: q.validFrom, validUntil: q.validUntil, createdAt: q.createdAt, priceBreaks: byQuote.get(q.id) ?? [],
-  }));
+  const { rows } = (await db.raw(
+    `SELECT q.id, q.part_id, q.supplier_id, q.currency, q.incoterm, q.moq, q.order_multiple, q.lead_time_days, q.valid_from, q.valid_until,
+            to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS created_at,
+            (SELECT string_agg(pb.min_qty || ' ' || pb.unit_price, ' ' ORDER BY pb.min_qty)
+               FROM price_breaks pb WHERE pb.quote_id = q.id AND pb.workspace_id = q.workspace_id) AS breaks
+       FROM quotes q WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) ORDER BY q.id`,
+    [workspaceId, ...idParams],
+  )) as { rows: Record<string, string | null>[] };
+  return rows.map((q) => {
+    const priceBreaks: CostingQuote['priceBreaks'] = [];
+    const words = q.breaks ? q.breaks.split(' ') : [];
+    for (let i = 0; i < words.length; i += 2) priceBreaks.push({ minQty: Number(words[i]), unitPrice: words[i + 1] });
+    return {
+      id: q.id!, partId: q.partId!, supplierId: q.supplierId!, currency: q.currency!, incoterm: q.incoterm as CostingQuote['incoterm'],
+      moq: Number(q.moq), orderMultiple: Number(q.orderMultiple), leadTimeDays: q.leadTimeDays as unknown as number | null,
+      validFrom: q.validFrom, validUntil: q.validUntil, createdAt: q.createdAt, priceBreaks,
+    };
+  });
 }

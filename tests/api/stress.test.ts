@@ -128,6 +128,24 @@ describe('stress policies', () => {
     await ws.agents.designer.patch(`/api/stress-policies/${copy.body.id}`).send({ version: copy.body.version, limits: { ...shelf.limits, led: { current: { value: 1.4 } } } }).expect(400);
     await ws.agents.buyer.post('/api/stress-policies').send({ name: 'x', limits: shelf.limits }).expect(403);
   });
+
+  it('a new workspace default re-checks the BOMs that use it, and the stored tally on the BOM list follows', async () => {
+    const listed = async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bomId);
+    const live = async () => (await ws.agents.viewer.get(`/api/boms/${bomId}/stress`).expect(200)).body.summary;
+    const policies = (await ws.agents.viewer.get('/api/stress-policies').expect(200)).body.items as { id: string; name: string; limits: Record<string, Record<string, unknown>> }[];
+    const byName = (n: string) => policies.find((p) => p.name === n)!;
+    const shelf = byName('Shelf-grade');
+    // The chip runs at 75 % of its LEV: inside Shelf-grade's 80 %, beyond a 50 % limit.
+    const strict = await ws.agents.designer.post('/api/stress-policies')
+      .send({ name: 'Resistors at half', limits: { ...shelf.limits, resistor: { ...shelf.limits.resistor, voltage: { value: 0.5, source: 'test policy' } } } }).expect(201);
+    const before = await live();
+    await expect.poll(listed, { timeout: 10_000 }).toMatchObject({ stress: before, cost: { fresh: true } });
+    await ws.agents.owner.post(`/api/stress-policies/${strict.body.id}/default`).expect(200);
+    const after = await live();
+    expect(after).not.toEqual(before);
+    await expect.poll(listed, { timeout: 10_000 }).toMatchObject({ stress: after, cost: { fresh: true } });
+    await ws.agents.owner.post(`/api/stress-policies/${shelf.id}/default`).expect(200);
+  });
 });
 
 describe('circuit helpers over HTTP', () => {

@@ -1,4 +1,5 @@
-import { Suspense, useCallback, useState, type ReactNode } from 'react';
+import { Suspense, useCallback, useState } from 'react';
+import { BackToList, DetailSection } from '../../../components/ui/detail-section';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '../../../shared/permissions';
@@ -32,20 +33,6 @@ export const partDetailLoader =
     ]);
     return null;
   };
-
-function Section({ id, title, action, children }: { id: string; title: string; action?: ReactNode; children: ReactNode }) {
-  return (
-    <section aria-labelledby={id} className="flex flex-col gap-3">
-      <div className="flex items-center justify-between gap-3">
-        <h2 id={id} className="text-lg font-semibold">
-          {title}
-        </h2>
-        {action}
-      </div>
-      {children}
-    </section>
-  );
-}
 
 export function PartDetailRoute() {
   const { id = '' } = useParams();
@@ -85,28 +72,24 @@ export function PartDetailRoute() {
           </>
         }
       />
-      <p className="-mt-3 mb-6 text-sm">
-        <Link to="/parts" className="text-muted underline-offset-2 hover:text-ink hover:underline">
-          ← All parts
-        </Link>
-      </p>
+      <BackToList to="/parts">All parts</BackToList>
 
       <div className="flex flex-col gap-10">
-        <Section id="part-details" title="Details">
+        <DetailSection id="part-details" title="Details">
           <PartFields part={part} />
-        </Section>
+        </DetailSection>
 
-        <Section id="part-ratings" title="Ratings">
+        <DetailSection id="part-ratings" title="Ratings">
           <PartRatings part={part} />
-        </Section>
+        </DetailSection>
 
-        <Section id="part-datasheets" title="Datasheets">
+        <DetailSection id="part-datasheets" title="Datasheets">
           <Suspense fallback={<LoadingState label="Loading datasheets…" />}>
             <Datasheets partId={part.id} canWrite={canWriteParts} />
           </Suspense>
-        </Section>
+        </DetailSection>
 
-        <Section
+        <DetailSection
           id="part-quotes"
           title="Quotes"
           action={
@@ -123,13 +106,13 @@ export function PartDetailRoute() {
             </p>
           ) : null}
           <QuotesTable quotes={quotes} show="supplier" canWrite={canWriteQuotes} onEdit={onEditQuote} empty="No quotes for this part yet." />
-        </Section>
+        </DetailSection>
 
-        <Section id="part-boms" title="BOMs that use this part">
+        <DetailSection id="part-boms" title="BOMs that use this part">
           <Suspense fallback={<LoadingState label="Loading the BOMs" />}>
             <PartBoms partId={part.id} />
           </Suspense>
-        </Section>
+        </DetailSection>
       </div>
 
       <Dialog open={editing} title={`Edit ${part.internalPn}`} size="lg" onClose={() => setEditing(false)}>

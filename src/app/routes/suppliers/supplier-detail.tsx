@@ -1,5 +1,6 @@
 import { useCallback, useMemo, useState, type ReactNode } from 'react';
-import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { BackToList, DetailSection } from '../../../components/ui/detail-section';
+import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '../../../shared/permissions';
 import { Button } from '../../../components/ui/button';
@@ -95,17 +96,10 @@ export function SupplierDetailRoute() {
           </>
         }
       />
-      <p className="-mt-3 mb-6 text-sm">
-        <Link to="/suppliers" className="text-muted underline-offset-2 hover:text-ink hover:underline">
-          ← All suppliers
-        </Link>
-      </p>
+      <BackToList to="/suppliers">All suppliers</BackToList>
 
       <div className="flex flex-col gap-10">
-        <section aria-labelledby="supplier-details" className="flex flex-col gap-3">
-          <h2 id="supplier-details" className="text-lg font-semibold">
-            Details
-          </h2>
+        <DetailSection id="supplier-details" title="Details">
           <dl className="grid grid-cols-2 gap-x-6 gap-y-3 sm:grid-cols-4">
             <Item term="Country">{supplier.country}</Item>
             <Item term="Currency">{supplier.currency}</Item>
@@ -138,22 +132,22 @@ export function SupplierDetailRoute() {
               </div>
             ) : null}
           </dl>
-        </section>
+        </DetailSection>
 
-        <section aria-labelledby="supplier-quotes" className="flex flex-col gap-3">
-          <div className="flex items-center justify-between gap-3">
-            <h2 id="supplier-quotes" className="text-lg font-semibold">
-              Quotes
-            </h2>
-            {canWriteQuotes ? (
+        <DetailSection
+          id="supplier-quotes"
+          title="Quotes"
+          action={
+            canWriteQuotes ? (
               <Button onClick={() => setQuoteEditing('new')} pending={parts.isPending}>
                 Add quote
               </Button>
-            ) : null}
-          </div>
+            ) : null
+          }
+        >
           {parts.isError ? <p className="text-sm text-muted">Part names could not be loaded: {describeError(parts.error)}</p> : null}
           <QuotesTable quotes={quotes} show="part" partName={partName} canWrite={canWriteQuotes} onEdit={onEditQuote} empty="No quotes from this supplier yet." />
-        </section>
+        </DetailSection>
       </div>
 
       <Dialog open={editing} title={`Edit ${supplier.name}`} onClose={() => setEditing(false)}>

@@ -1,9 +1,10 @@
-import { dec, Dec, decOr, moneyText, ONE, pctToFraction, perUnitText, ZERO } from './decimal';
+import { dec, Dec, decOr, MONEY_DP, moneyText, ONE, PER_UNIT_DP, pctToFraction, perUnitText, ZERO } from './decimal';
+import { Dec40 } from './dec40';
 import { CostingInputError } from './errors';
 import type { DutyMatch } from './duty';
 import { createFxIndex, type FxFound, type FxIndex, type FxLookup } from './fx';
 import { needsAdder } from './incoterms';
-import { lineAdders, type LineAdders } from './landed';
+import { INSURED_SHARE, lineAdders, type LineAdders } from './landed';
 import {
   floatsApart,
   microPrices,
@@ -16,7 +17,7 @@ import {
   type FloatOrder,
   type OrderSpend,
 } from './order-quantity';
-import { prepareProfile, type PreparedProfile } from './profile';
+import { prepareProfile, type PercentAdders, type PreparedProfile } from './profile';
 import {
   compareQuotes,
   eligibilityReasons,
@@ -235,6 +236,28 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
 
   const factors = new LandedFactors(profile);
   const partRanks = new Map<string, Pick<LineRank, 'part' | 'duty' | 'candidates' | 'fxMissing'>>();
+  // A few distinct multipliers, duty rates and quantity fractions recur over thousands of
+  // parts and lines: each is worked out once.
+  const floats = new Map<Dec, number>();
+  const rankingFloatOf = (m: Dec) => {
+    let f = floats.get(m);
+    if (f === undefined) floats.set(m, (f = rankingFloat(m)));
+    return f;
+  };
+  const dutyTexts = new Map<DutyMatch, string>();
+  const dutyText = (d: DutyMatch) => {
+    let t = dutyTexts.get(d);
+    if (t === undefined) dutyTexts.set(d, (t = d.ratePct.toString()));
+    return t;
+  };
+  const ratios = new Map<Dec, Map<string, [number, number]>>();
+  const ratioOf = (qtyPerUnit: string, q: Dec, attrition: Dec): [number, number] => {
+    let byQty = ratios.get(attrition);
+    if (!byQty) ratios.set(attrition, (byQty = new Map()));
+    let r = byQty.get(qtyPerUnit);
+    if (!r) byQty.set(qtyPerUnit, (r = exactRatio(q, ONE.plus(attrition))));
+    return r;
+  };
   for (const pl of lines) {
     const part = pl.line.kind === 'part' && pl.line.partId ? parts.get(pl.line.partId) : undefined;
     if (!part) continue;
@@ -251,12 +274,12 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
           continue;
         }
         const multiplier = factors.multiplier(slot.incoterm, duty, r);
-        candidates.push({ slot, fx: r, multiplier, multiplierF: rankingFloat(multiplier), groupKey: groupKey(part.category, duty, slot.quote.supplierId, slot.incoterm, slot.quote.currency) });
+        candidates.push({ slot, fx: r, multiplier, multiplierF: rankingFloatOf(multiplier), groupKey: groupKey(part.category, dutyText(duty), slot.quote.supplierId, slot.incoterm, slot.quote.currency) });
       }
       partRanks.set(part.id, (shared = { part, duty, candidates, fxMissing }));
     }
     const attrition = pl.attrition ?? profile.attrition.get(part.category) ?? ZERO;
-    const [reqNum, reqDen] = exactRatio(pl.qtyPerUnit, ONE.plus(attrition));
+    const [reqNum, reqDen] = ratioOf(String(pl.line.qtyPerUnit), pl.qtyPerUnit, attrition);
     pl.rank = { ...shared, attrition, reqNum, reqDen };
   }
 
@@ -302,10 +325,9 @@ interface Work {
   costPerUnit?: Dec;
   oneTimeCost?: Dec;
   fxRows: FxRateUsed[];
-  // Filled in the second pass; `adders` is dropped once the line's output is written.
+  // Filled in the second pass.
   adders?: LineAdders;
   freightShare?: Dec;
-  out?: CostRollLine;
   assembly: Dec;
   landed: Dec;
 }
@@ -603,46 +625,46 @@ interface PoolCarrier {
 }
 
 /**
- * Shares a per-build pool over the carriers in proportion to a key (goods value or
- * weight). Returns null when there is nothing to share. A zero key total falls back to
- * goods value, then to equal shares per line, so the pool is never dropped silently.
+ * How a per-build pool is shared: per unit of a key (goods value or weight) or, when the
+ * keys sum to 0, equally per line, so the pool is never dropped silently.
  */
-function sharePool<T>(
-  pool: Dec,
-  carriers: T[],
-  view: (c: T) => PoolCarrier,
-  byWeight: boolean,
-  warnings: RollWarning[],
-): Map<T, Dec> | null {
+type PoolRule = { key: 'goods' | 'weight'; perKey: Dec } | { key: 'line'; each: Dec };
+
+/**
+ * The rule for sharing a pool over the carriers in proportion to a key, or null when there
+ * is nothing to share. A zero weight total falls back to goods value, then to equal shares.
+ */
+function poolRule<T>(pool: Dec, carriers: T[], view: (c: T) => PoolCarrier, byWeight: boolean, warnings: RollWarning[]): PoolRule | null {
   if (pool.isZero() || carriers.length === 0) return null;
-  let keyOf = byWeight ? (c: T) => view(c).weight : (c: T) => view(c).goods;
-  let total = carriers.reduce((t, c) => t.plus(keyOf(c)), ZERO);
-  if (total.isZero() && byWeight) {
+  const total = (key: 'goods' | 'weight') => carriers.reduce((t, c) => t.plus(view(c)[key]), ZERO);
+  let key: 'goods' | 'weight' = byWeight ? 'weight' : 'goods';
+  let sum = total(key);
+  if (sum.isZero() && byWeight) {
     warnings.push({ code: 'freight_weight_zero' });
-    keyOf = (c) => view(c).goods;
-    total = carriers.reduce((t, c) => t.plus(keyOf(c)), ZERO);
+    key = 'goods';
+    sum = total(key);
   }
-  const shares = new Map<T, Dec>();
-  if (total.isZero()) {
-    const each = pool.div(carriers.reduce((n, c) => n + view(c).count, 0));
-    for (const c of carriers) shares.set(c, view(c).count === 1 ? each : each.times(view(c).count));
-  } else {
-    // One division for the pool, one multiplication per carrier.
-    const perKey = pool.div(total);
-    for (const c of carriers) shares.set(c, keyOf(c).times(perKey));
-  }
-  return shares;
+  // One division for the pool, one multiplication per carrier.
+  if (!sum.isZero()) return { key, perKey: pool.div(sum) };
+  return { key: 'line', each: pool.div(carriers.reduce((n, c) => n + view(c).count, 0)) };
+}
+
+/** A carrier's share of a pool, or undefined when its Incoterm does not carry the adder. */
+function shareOf(rule: PoolRule | null, adder: 'freight' | 'fees', c: PoolCarrier): Dec | undefined {
+  if (!rule || !needsAdder(c.incoterm, adder)) return undefined;
+  if (rule.key === 'line') return c.count === 1 ? rule.each : rule.each.times(c.count);
+  return c[rule.key].times(rule.perKey);
 }
 
 /**
- * The per-shipment freight and fees shared over the carriers whose Incoterm carries them,
+ * The per-shipment freight and fees rules over the carriers whose Incoterm carries them,
  * the warnings when nothing carries them, and the FX rows of the pools and assembly rates.
  */
 function shareBuildPools<T>(p: PreparedCostRoll, items: T[], view: (c: T) => PoolCarrier, warnings: RollWarning[]) {
   const freightCarriers = items.filter((c) => needsAdder(view(c).incoterm, 'freight'));
   const feeCarriers = items.filter((c) => needsAdder(view(c).incoterm, 'fees'));
-  const freight = p.freightPool.ok ? sharePool(p.freightPool.value, freightCarriers, view, p.byWeight, warnings) : null;
-  const fees = p.feesPool.ok ? sharePool(p.feesPool.value, feeCarriers, view, false, warnings) : null;
+  const freight = p.freightPool.ok ? poolRule(p.freightPool.value, freightCarriers, view, p.byWeight, warnings) : null;
+  const fees = p.feesPool.ok ? poolRule(p.feesPool.value, feeCarriers, view, false, warnings) : null;
   if (p.freightPool.ok && !p.freightPool.value.isZero() && freightCarriers.length === 0) {
     warnings.push({ code: 'freight_unallocated', detail: 'no chosen quote has an Incoterm that carries freight' });
   }
@@ -674,16 +696,23 @@ export interface RollOptions {
  * freight and fees are shared over the chosen quotes whose Incoterm carries them (freight
  * by goods value or by weight, fees by goods value), then insurance and duty are computed
  * with those shares in. Nothing is rounded.
+ *
+ * The roll runs grouped (`rollGrouped`), or line by line in decimal.js when its amounts are
+ * too large for that (see `EXACT_RANGE`); with `exactRanking` line by line, every quote
+ * priced exactly: the tests' reference.
  */
 export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: RollOptions = {}): CostRollResult {
   const N = dec(buildQty, 'qty');
   if (!N.isInteger() || N.lt(1)) throw new CostingInputError(`must be a whole number ≥ 1 (${buildQty})`, 'qty');
   const amortiseOver = p.amortisationQty ?? N;
-  const warnings: RollWarning[] = [...p.staticWarnings];
   const wantLines = options.lines !== false;
   const reference = options.exactRanking === true;
-  if (!wantLines && !reference) return rollTotals(p, buildQty, N, amortiseOver, warnings);
+  return (!reference && rollGrouped(p, buildQty, N, amortiseOver, wantLines)) || rollLineByLine(p, buildQty, N, amortiseOver, wantLines, reference);
+}
 
+/** The roll line by line in decimal.js: each line's adders, then sums in line-id order. */
+function rollLineByLine(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec, wantLines: boolean, reference: boolean): CostRollResult {
+  const warnings: RollWarning[] = [...p.staticWarnings];
   const work: Work[] = p.lines.map((pl) => {
     const w: Work = {
       pl,
@@ -703,12 +732,8 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   });
 
   const partLines = work.filter((w) => w.status === 'costed' && w.chosen);
-  const { freight: freightShares, fees: feeShares, fxSeen } = shareBuildPools(
-    p,
-    partLines,
-    (w) => ({ incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 }),
-    warnings,
-  );
+  const carrier = (w: Work): PoolCarrier => ({ incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 });
+  const { freight: freightRule, fees: feesRule, fxSeen } = shareBuildPools(p, partLines, carrier, warnings);
 
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
@@ -722,53 +747,61 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
     if (w.status !== 'costed') continue;
     noteFx(w.fxRows);
     if (w.chosen) {
-      const c = w.chosen;
-      w.freightShare = freightShares?.get(w);
-      w.adders = lineAdders({
-        goods: w.goods!,
-        incoterm: c.pq.incoterm,
-        pct: p.profile.pct,
-        dutyBasis: p.profile.dutyBasis,
-        dutyRate: w.duty!.rate,
-        freightShare: w.freightShare,
-        feesShare: feeShares?.get(w),
-      });
-      w.assembly = w.assemblyPerUnit.isZero() ? ZERO : w.assemblyPerUnit.times(N);
-      w.landed = add(w.adders.landed, w.assembly);
-      w.excessQty = c.order.orderQty - w.required!;
-      const excessInQuote = c.order.unitPrice.times(w.excessQty);
-      w.excessValue = c.fx.route === 'same' ? excessInQuote : excessInQuote.times(c.fx.rate);
-      const supplierId = c.pq.quote.supplierId;
+      lineExcess(w);
+      lineCharges(p, w, N, carrier(w), freightRule, feesRule);
+      const supplierId = w.chosen.pq.quote.supplierId;
       let s = bySupplier.get(supplierId);
       if (!s) bySupplier.set(supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
       s.goods = add(s.goods, w.goods!);
-      s.excessValue = add(s.excessValue, w.excessValue);
+      s.excessValue = add(s.excessValue, w.excessValue!);
       s.landed = add(s.landed, w.landed);
       s.count += 1;
     } else {
-      const perUnit = w.costPerUnit ?? ZERO;
-      const oneTime = w.oneTimeCost ?? ZERO;
-      costLinesPerUnit = add(costLinesPerUnit, perUnit);
-      oneTimeTotal = add(oneTimeTotal, oneTime);
-      w.landed = perUnit.times(N).plus(oneTime.times(N).div(amortiseOver));
+      costLineCharges(w, N, amortiseOver);
+      costLinesPerUnit = add(costLinesPerUnit, w.costPerUnit ?? ZERO);
+      oneTimeTotal = add(oneTimeTotal, w.oneTimeCost ?? ZERO);
     }
     let c = byCategory.get(w.category);
     if (!c) byCategory.set(w.category, (c = emptySums()));
     addLine(c, w);
-    // Write the line's output now and let its decimals go: fewer long-lived objects.
-    if (wantLines) w.out = lineOutput(w, N);
-    w.adders = undefined;
   }
 
-  const lines: CostRollLine[] = wantLines
-    ? [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => w.out ?? lineOutput(w, N))
-    : [];
+  const lines: CostRollLine[] = wantLines ? [...work].sort((a, b) => a.pl.index - b.pl.index).map((w) => workOutput(w, N)) : [];
   return rollResult(p, N, amortiseOver, {
     warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines,
     leftOut: work.filter((w) => w.status === 'left_out'),
     dnp: work.filter((w) => w.status === 'dnp'),
     lineWarningCount: work.reduce((n, w) => n + w.warnings.length, 0),
   });
+}
+
+/** E = Q − R and its value in the reporting currency, for a line with a chosen quote. */
+function lineExcess(w: Work): void {
+  const c = w.chosen!;
+  w.excessQty = c.order.orderQty - w.required!;
+  const excessInQuote = c.order.unitPrice.times(w.excessQty);
+  w.excessValue = c.fx.route === 'same' ? excessInQuote : excessInQuote.times(c.fx.rate);
+}
+
+/** A part line's shares, adders, assembly and landed cost, once the pools' rules are known. */
+function lineCharges(p: PreparedCostRoll, w: Work, N: Dec, view: PoolCarrier, freightRule: PoolRule | null, feesRule: PoolRule | null): void {
+  w.freightShare = shareOf(freightRule, 'freight', view);
+  w.adders = lineAdders({
+    goods: w.goods!,
+    incoterm: w.chosen!.pq.incoterm,
+    pct: p.profile.pct,
+    dutyBasis: p.profile.dutyBasis,
+    dutyRate: w.duty!.rate,
+    freightShare: w.freightShare,
+    feesShare: shareOf(feesRule, 'fees', view),
+  });
+  w.assembly = w.assemblyPerUnit.isZero() ? ZERO : w.assemblyPerUnit.times(N);
+  w.landed = add(w.adders.landed, w.assembly);
+}
+
+/** A cost line's charge to this build: per-unit cost × N plus one-time cost × N / amortisation quantity. */
+function costLineCharges(w: Work, N: Dec, amortiseOver: Dec): void {
+  w.landed = (w.costPerUnit ?? ZERO).times(N).plus((w.oneTimeCost ?? ZERO).times(N).div(amortiseOver));
 }
 
 interface RollParts {
@@ -874,14 +907,14 @@ function rollResult(p: PreparedCostRoll, N: Dec, amortiseOver: Dec, r: RollParts
 }
 
 // ---------------------------------------------------------------------------------------
-// Totals only (the volume curve)
+// The roll in groups: totals from group sums, each line's figures in BigInts (`Dec40`)
 
 /**
  * Part lines whose chosen quotes share category, duty rate, supplier, Incoterm and
  * currency. Every adder is linear in the goods value and the per-shipment shares
  * (`lineAdders`), and shares are proportional to goods value or weight, so a group's adders
  * are the sum of its lines' adders. Goods and excess are summed as exact integers
- * (millionths of the quote's currency) and converted once per group: a curve point costs
+ * (millionths of the quote's currency) and converted once per group: the totals cost
  * integer work per line and decimal work per group, not per line.
  */
 interface Group {
@@ -904,8 +937,23 @@ interface Group {
   goods: Dec;
 }
 
-function groupKey(category: string, duty: DutyMatch, supplierId: string, incoterm: string, currency: string): string {
-  return `${category}\u0001${duty.ratePct.toString()}\u0001${supplierId}\u0001${incoterm}\u0001${currency}`;
+/** A part line settled in integers, kept (when lines are wanted) to print its figures. */
+interface IntegerLine {
+  pl: PreparedLine;
+  rank: LineRank;
+  cand: Candidate;
+  required: number;
+  orderQty: number;
+  /** Unit price, goods Q × price and excess E × price, in millionths of the quote's currency. */
+  priceMicro: number;
+  goodsMicro: number;
+  excessMicro: number;
+  assemblyPerUnit: Dec;
+  missingPins: boolean;
+}
+
+function groupKey(category: string, dutyPct: string, supplierId: string, incoterm: string, currency: string): string {
+  return `${category}\u0001${dutyPct}\u0001${supplierId}\u0001${incoterm}\u0001${currency}`;
 }
 
 const MICRO = new Dec(1_000_000);
@@ -914,8 +962,26 @@ function micros(small: number, big: bigint): Dec {
   return (big === 0n ? new Dec(small) : new Dec((BigInt(small) + big).toString())).div(MICRO);
 }
 
-/** The totals-only roll: `rollPrepared`'s figures with lines grouped as `Group` says. */
-function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec, warnings: RollWarning[]): CostRollResult {
+/**
+ * Grouping changes the order in which amounts are added, and decimal.js rounds each sum to
+ * 40 significant digits. Below 10^20 that rounding sits at 10^-20 or finer, far below the
+ * 10 decimals printed, so both orders print the same; a roll with a group or cost line at
+ * or above it (only absurd prices or quantities get there) is rolled line by line.
+ */
+const EXACT_RANGE = new Dec('1e20');
+const withinExactRange = (amount: Dec) => amount.abs().lt(EXACT_RANGE);
+
+/**
+ * The roll by groups (`Group`). Part lines with no pin, a choice the floats settle, a price
+ * in whole millionths and freight not shared by weight — the common case — are summed as
+ * integers; every other line is costed in decimal.js as the reference roll does and joins
+ * its group. The totals come from the group sums; each line's own figures, when wanted,
+ * are computed in decimal.js's arithmetic (`Dec40` on BigInts for the integer lines,
+ * decimal.js objects for the rest).
+ * Null when an amount is beyond `EXACT_RANGE`.
+ */
+function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec, wantLines: boolean): CostRollResult | null {
+  const warnings: RollWarning[] = [...p.staticWarnings];
   const groups = new Map<string, Group>();
   const groupFor = (key: string, category: string, duty: DutyMatch, pq: PreparedQuote, fx: FxFound): Group => {
     let g = groups.get(key);
@@ -929,6 +995,8 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
     }
     return g;
   };
+  const integerLines: IntegerLine[] = [];
+  const decimalLines: Work[] = [];
   const costWork: Work[] = [];
   const leftOut: Work[] = [];
   const dnp: Work[] = [];
@@ -938,7 +1006,9 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
 
   for (const pl of p.lines) {
     if (pl.line.dnp) {
-      dnp.push(newWork(pl));
+      const w = newWork(pl);
+      w.status = 'dnp';
+      dnp.push(w);
       continue;
     }
     const rank = pl.rank;
@@ -948,8 +1018,6 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
       (w.status === 'left_out' ? leftOut : costWork).push(w);
       continue;
     }
-    // The common case in integers: a part line, no pin, floats settle the choice, a
-    // 6-decimal price, freight not shared by weight.
     if (rank && !pl.line.pinnedQuoteId && !p.byWeight && rank.candidates.length > 0) {
       const required = lineRequired(pl, rank, buildQty, N);
       const k = settle(rank.candidates, required);
@@ -967,15 +1035,20 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
         const em = g.excessMicro + excess;
         if (Number.isSafeInteger(em)) g.excessMicro = em;
         else g.excessBig += BigInt(excess);
+        let assemblyPerUnit = ZERO;
+        let missingPins = false;
         if (p.assemblyRates.ok) {
           const a = (pl.assembly ??= lineAssembly(p.assemblyRates, pl.qtyPerUnit, rank.part));
+          assemblyPerUnit = a.perUnit;
+          missingPins = a.missingPins;
           g.assemblyPerUnit = add(g.assemblyPerUnit, a.perUnit);
           if (a.missingPins) lineWarningCount += 1;
         }
+        if (wantLines) integerLines.push({ pl, rank, cand: c, required, orderQty: o.qty, priceMicro: price, goodsMicro: goods, excessMicro: excess, assemblyPerUnit, missingPins });
         continue;
       }
     }
-    // Everything else line by line in decimal.js, as `rollPrepared` does, then into its group.
+    // Everything else line by line in decimal.js, as the reference roll does, then into its group.
     const w = costPartLine(p, newWork(pl), buildQty, N, false);
     lineWarningCount += w.warnings.length;
     if (w.status === 'left_out' || !w.chosen) {
@@ -983,13 +1056,14 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
       continue;
     }
     const ch = w.chosen;
-    const g = groupFor(groupKey(w.category, w.duty!, ch.pq.quote.supplierId, ch.pq.incoterm, ch.pq.quote.currency), w.category, w.duty!, ch.pq, ch.fx);
+    lineExcess(w);
+    const g = groupFor(groupKey(w.category, w.duty!.ratePct.toString(), ch.pq.quote.supplierId, ch.pq.incoterm, ch.pq.quote.currency), w.category, w.duty!, ch.pq, ch.fx);
     g.count += 1;
     g.goodsDec = add(g.goodsDec, w.goods!);
-    const excessInQuote = ch.order.unitPrice.times(ch.order.orderQty - w.required!);
-    g.excessDec = add(g.excessDec, ch.fx.route === 'same' ? excessInQuote : excessInQuote.times(ch.fx.rate));
+    g.excessDec = add(g.excessDec, w.excessValue!);
     if (w.weight) g.weight = add(g.weight, w.weight);
     g.assemblyPerUnit = add(g.assemblyPerUnit, w.assemblyPerUnit);
+    decimalLines.push(w);
   }
 
   const all = [...groups.values()];
@@ -997,7 +1071,7 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
     const inQuote = micros(g.goodsMicro, g.goodsBig);
     g.goods = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.goodsDec);
   }
-  const { freight: freightShares, fees: feeShares, fxSeen } = shareBuildPools(p, all, (g) => g, warnings);
+  const { freight: freightRule, fees: feesRule, fxSeen } = shareBuildPools(p, all, (g) => g, warnings);
 
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
@@ -1020,11 +1094,12 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
       pct: p.profile.pct,
       dutyBasis: p.profile.dutyBasis,
       dutyRate: g.duty.rate,
-      freightShare: freightShares?.get(g),
-      feesShare: feeShares?.get(g),
+      freightShare: shareOf(freightRule, 'freight', g),
+      feesShare: shareOf(feesRule, 'fees', g),
     });
     const assembly = g.assemblyPerUnit.isZero() ? ZERO : g.assemblyPerUnit.times(N);
     const landed = add(a.landed, assembly);
+    if (!withinExactRange(landed)) return null;
     const inQuote = micros(g.excessMicro, g.excessBig);
     const excessValue = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.excessDec);
     const c = categorySums(g.category);
@@ -1048,14 +1123,86 @@ function rollTotals(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver:
   }
   for (const w of costWork) {
     noteFx(w.fxRows);
-    const perUnit = w.costPerUnit ?? ZERO;
-    const oneTime = w.oneTimeCost ?? ZERO;
-    costLinesPerUnit = add(costLinesPerUnit, perUnit);
-    oneTimeTotal = add(oneTimeTotal, oneTime);
-    w.landed = perUnit.times(N).plus(oneTime.times(N).div(amortiseOver));
+    costLineCharges(w, N, amortiseOver);
+    if (!withinExactRange(w.landed)) return null;
+    costLinesPerUnit = add(costLinesPerUnit, w.costPerUnit ?? ZERO);
+    oneTimeTotal = add(oneTimeTotal, w.oneTimeCost ?? ZERO);
     addLine(categorySums(w.category), w);
   }
-  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines: [], leftOut, dnp, lineWarningCount });
+
+  let lines: CostRollLine[] = [];
+  if (wantLines) {
+    const out = new Array<CostRollLine>(p.lines.length);
+    const exact = exactFigures(p, N, freightRule, feesRule);
+    for (const l of integerLines) out[l.pl.index] = exact.output(l);
+    for (const w of decimalLines) {
+      lineCharges(p, w, N, { incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 }, freightRule, feesRule);
+      out[w.pl.index] = workOutput(w, N);
+    }
+    for (const w of [...costWork, ...leftOut, ...dnp]) out[w.pl.index] = workOutput(w, N);
+    lines = out;
+  }
+  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines, leftOut, dnp, lineWarningCount });
+}
+
+/**
+ * Prints the integer lines' figures: the same rules (`lineAdders`) on `Dec40` numbers, the rates, percentages and pool rules converted once per roll.
+ */
+function exactFigures(p: PreparedCostRoll, N: Dec, freightRule: PoolRule | null, feesRule: PoolRule | null) {
+  const n = BigInt(N.toFixed());
+  const Nx = Dec40.of(N);
+  const { pct } = p.profile;
+  const pctX: PercentAdders<Dec40> = {
+    origin: Dec40.of(pct.origin), freight: Dec40.of(pct.freight), insurance: Dec40.of(pct.insurance), destination: Dec40.of(pct.destination),
+    insured: Dec40.of(pct.insured ?? pct.insurance.times(INSURED_SHARE)),
+  };
+  const cache = new Map<Dec, Dec40>();
+  const ex = (d: Dec) => {
+    let x = cache.get(d);
+    if (!x) cache.set(d, (x = Dec40.of(d)));
+    return x;
+  };
+  // A pool's share for one line (count 1); never by weight here (such rolls have no integer lines).
+  const share = (rule: PoolRule | null, adder: 'freight' | 'fees', incoterm: Incoterm, goods: Dec40): Dec40 | undefined => {
+    if (!rule || !needsAdder(incoterm, adder)) return undefined;
+    if (rule.key === 'line') return ex(rule.each);
+    if (rule.key === 'weight') throw new Error('freight by weight is costed line by line in decimal.js');
+    return goods.times(ex(rule.perKey));
+  };
+  const print: Printer<Dec40> = {
+    money: (v) => v.toFixed(MONEY_DP),
+    perUnit: (v) => v.toFixed(PER_UNIT_DP),
+    perBuildUnit: (v) => v.divToFixed(n, PER_UNIT_DP),
+  };
+  return {
+    output(l: IntegerLine): CostRollLine {
+      const { cand, rank } = l;
+      const rate = ex(cand.fx.rate);
+      const same = cand.fx.route === 'same';
+      const price = Dec40.micros(l.priceMicro);
+      const goodsInQuote = Dec40.micros(l.goodsMicro);
+      const excessInQuote = Dec40.micros(l.excessMicro);
+      const goods = same ? goodsInQuote : goodsInQuote.times(rate);
+      const incoterm = cand.slot.incoterm;
+      const freightShare = share(freightRule, 'freight', incoterm, goods);
+      const adders = lineAdders<Dec40>(
+        { goods, incoterm, pct: pctX, dutyBasis: p.profile.dutyBasis, dutyRate: ex(rank.duty.rate), freightShare, feesShare: share(feesRule, 'fees', incoterm, goods) },
+        Dec40.ZERO,
+      );
+      const assembly = l.assemblyPerUnit.isZero() ? Dec40.ZERO : ex(l.assemblyPerUnit).times(Nx);
+      const q = cand.slot.quote;
+      return lineOutput<Dec40>(
+        {
+          pl: l.pl, status: 'costed', category: rank.part.category, duty: rank.duty, required: l.required, excessQty: l.orderQty - l.required,
+          fxRows: cand.fx.rows, warnings: l.missingPins ? [{ code: 'missing_pins', detail: rank.part.id }] : [],
+          quote: { id: q.id, supplierId: q.supplierId, currency: q.currency, incoterm, orderQty: l.orderQty, unitPrice: price, unitPriceConverted: price.times(rate) },
+          amounts: { goods, excessValue: same ? excessInQuote : excessInQuote.times(rate), adders, freightShare },
+          assembly, landed: adders.landed.plus(assembly),
+        },
+        print,
+      );
+    },
+  };
 }
 
 /** The FX rows behind a roll, each once (per direction), by date then pair. */
@@ -1066,46 +1213,90 @@ function usedRates(seen: Set<FxRateUsed>): FxRateUsed[] {
   return [...unique.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, r]) => r);
 }
 
-function lineOutput(w: Work, N: Dec): CostRollLine {
-  const { line } = w.pl;
-  const c = w.chosen;
-  const a = w.adders;
-  const zero = moneyText(ZERO);
+/** How a line's numbers print: decimal.js values or exact ones, money and per-unit places. */
+interface Printer<T> {
+  money(v: T): string;
+  perUnit(v: T): string;
+  /** A line's landed amount per built unit (÷ N). */
+  perBuildUnit(v: T): string;
+}
+
+/** One output line's facts, its amounts in the number type that computed them. */
+interface LineFacts<T> {
+  pl: PreparedLine;
+  status: Work['status'];
+  category: string;
+  warnings: LineWarning[];
+  fxRows: FxRateUsed[];
+  required?: number;
+  excessQty?: number;
+  duty?: DutyMatch;
+  costPerUnit?: Dec;
+  oneTimeCost?: Dec;
+  quote?: { id: string; supplierId: string; currency: string; incoterm: Incoterm; orderQty: number; unitPrice: T; unitPriceConverted: T };
+  amounts?: { goods: T; excessValue: T; adders: LineAdders<T>; freightShare?: T };
+  assembly: T;
+  landed: T;
+}
+
+const ZERO_MONEY = moneyText(ZERO);
+
+function lineOutput<T>(f: LineFacts<T>, print: Printer<T>): CostRollLine {
+  const { line } = f.pl;
+  const q = f.quote;
+  const m = f.amounts;
+  const a = m?.adders;
   return {
     lineId: line.id,
     refDes: line.refDes ?? null,
     kind: line.kind,
-    status: w.status,
+    status: f.status,
     partId: line.partId ?? null,
-    category: w.category,
-    quoteId: c ? c.pq.quote.id : null,
-    supplierId: c ? c.pq.quote.supplierId : null,
-    incoterm: c ? c.pq.incoterm : null,
-    requiredQty: w.required ?? null,
-    orderQty: c ? c.order.orderQty : null,
-    excessQty: w.excessQty ?? null,
-    unitPrice: c ? perUnitText(c.order.unitPrice) : null,
-    unitPriceCurrency: c ? c.pq.quote.currency : null,
-    unitPriceConverted: c ? perUnitText(c.order.unitPrice.times(c.fx.rate)) : null,
-    goodsValue: a && w.goods ? moneyText(w.goods) : zero,
-    excessValue: a ? moneyText(w.excessValue!) : zero,
-    origin: a ? moneyText(a.origin) : zero,
-    freight: a ? moneyText(a.freight) : zero,
-    freightShare: a && w.freightShare ? moneyText(w.freightShare) : zero,
-    insurance: a ? moneyText(a.insurance) : zero,
-    customsValue: a && a.customsValue ? moneyText(a.customsValue) : null,
-    dutyPct: w.duty ? w.duty.ratePct.toString() : null,
-    duty: a ? moneyText(a.duty) : zero,
-    fees: a ? moneyText(a.fees) : zero,
-    destination: a ? moneyText(a.destination) : zero,
-    assembly: moneyText(w.assembly),
-    costPerUnit: w.costPerUnit ? perUnitText(w.costPerUnit) : null,
-    oneTimeCost: w.oneTimeCost ? moneyText(w.oneTimeCost) : null,
-    landed: moneyText(w.landed),
-    landedPerUnit: perUnitText(w.landed.div(N)),
-    fxRates: w.status === 'costed' ? w.fxRows : [],
-    warnings: w.warnings,
+    category: f.category,
+    quoteId: q ? q.id : null,
+    supplierId: q ? q.supplierId : null,
+    incoterm: q ? q.incoterm : null,
+    requiredQty: f.required ?? null,
+    orderQty: q ? q.orderQty : null,
+    excessQty: f.excessQty ?? null,
+    unitPrice: q ? print.perUnit(q.unitPrice) : null,
+    unitPriceCurrency: q ? q.currency : null,
+    unitPriceConverted: q ? print.perUnit(q.unitPriceConverted) : null,
+    goodsValue: m ? print.money(m.goods) : ZERO_MONEY,
+    excessValue: m ? print.money(m.excessValue) : ZERO_MONEY,
+    origin: a ? print.money(a.origin) : ZERO_MONEY,
+    freight: a ? print.money(a.freight) : ZERO_MONEY,
+    freightShare: m && m.freightShare ? print.money(m.freightShare) : ZERO_MONEY,
+    insurance: a ? print.money(a.insurance) : ZERO_MONEY,
+    customsValue: a && a.customsValue ? print.money(a.customsValue) : null,
+    dutyPct: f.duty ? f.duty.ratePct.toString() : null,
+    duty: a ? print.money(a.duty) : ZERO_MONEY,
+    fees: a ? print.money(a.fees) : ZERO_MONEY,
+    destination: a ? print.money(a.destination) : ZERO_MONEY,
+    assembly: print.money(f.assembly),
+    costPerUnit: f.costPerUnit ? perUnitText(f.costPerUnit) : null,
+    oneTimeCost: f.oneTimeCost ? moneyText(f.oneTimeCost) : null,
+    landed: print.money(f.landed),
+    landedPerUnit: print.perBuildUnit(f.landed),
+    fxRates: f.status === 'costed' ? f.fxRows : [],
+    warnings: f.warnings,
   };
+}
+
+/** A line costed in decimal.js, printed. */
+function workOutput(w: Work, N: Dec): CostRollLine {
+  const c = w.chosen;
+  return lineOutput<Dec>(
+    {
+      ...w,
+      quote: c && {
+        id: c.pq.quote.id, supplierId: c.pq.quote.supplierId, currency: c.pq.quote.currency, incoterm: c.pq.incoterm,
+        orderQty: c.order.orderQty, unitPrice: c.order.unitPrice, unitPriceConverted: c.order.unitPrice.times(c.fx.rate),
+      },
+      amounts: w.adders && { goods: w.goods!, excessValue: w.excessValue!, adders: w.adders, freightShare: w.freightShare },
+    },
+    { money: moneyText, perUnit: perUnitText, perBuildUnit: (v) => perUnitText(v.div(N)) },
+  );
 }
 
 /**

@@ -1,9 +1,10 @@
 /**
- * The cost roll ranks quotes in floats and prices only the winner in decimal.js; the
- * `exactRanking` option prices and compares every eligible quote in decimal.js, as the
- * costing rules state the choice. These tests hold the two to the same output, character
- * for character, with ties and near-ties (closer than floats can tell apart) built in.
- * This is the engine's own consistency, not an outside reference.
+ * The cost roll ranks quotes in floats, sums grouped lines as integers and prints each
+ * line's figures from exact values; the `exactRanking` option prices and compares every
+ * eligible quote in decimal.js and works line by line, as the costing rules state them.
+ * These tests hold the two to the same output, character for character, lines included,
+ * with ties and near-ties (closer than floats can tell apart) built in. This is the
+ * engine's own consistency, not an outside reference.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

@@ -46,11 +46,11 @@ export function needsAdder(incoterm: Incoterm, adder: AdderName): boolean {
   return INCOTERM_ADDERS[incoterm][adder];
 }
 
-export interface CustomsValueParts {
-  goods: Dec;
-  origin: Dec;
-  freight: Dec;
-  insurance: Dec;
+export interface CustomsValueParts<T = Dec> {
+  goods: T;
+  origin: T;
+  freight: T;
+  insurance: T;
 }
 
 /**
@@ -59,8 +59,8 @@ export interface CustomsValueParts {
  * are not. A C- or D-term price already holds its carriage, so it is taken as it stands.
  * DDP: the seller pays the duty, so there is no customs value for the buyer (null).
  */
-export function customsValue(incoterm: Incoterm, basis: DutyBasis, p: CustomsValueParts): Dec | null {
-  const plus = (a: Dec, b: Dec) => (b.isZero() ? a : a.plus(b));
+export function customsValue<T extends { plus(b: T): T; isZero(): boolean } = Dec>(incoterm: Incoterm, basis: DutyBasis, p: CustomsValueParts<T>): T | null {
+  const plus = (a: T, b: T) => (b.isZero() ? a : a.plus(b));
   switch (incoterm) {
     case 'EXW':
       return basis === 'CIF' ? plus(plus(plus(p.goods, p.origin), p.freight), p.insurance) : plus(p.goods, p.origin);

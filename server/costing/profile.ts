@@ -5,13 +5,13 @@ import { CostingInputError } from './errors';
 import type { CurrencyCode, DutyBasis, FreightBasis, LandedCostProfile } from './types';
 
 /** The percentage adders as fractions of goods value. */
-export interface PercentAdders {
-  origin: Dec;
-  freight: Dec;
-  insurance: Dec;
-  destination: Dec;
+export interface PercentAdders<T = Dec> {
+  origin: T;
+  freight: T;
+  insurance: T;
+  destination: T;
   /** insurance × 1.10, when precomputed. */
-  insured?: Dec;
+  insured?: T;
 }
 
 /** A landed-cost profile parsed once: fractions instead of percent strings, defaults filled in. */

@@ -6,11 +6,12 @@ import { costRollInputArb } from './test-arbitraries';
 import type { CostRollInput, CostRollResult } from './types';
 
 /**
- * The volume curve's totals-only roll groups part lines and sums their goods as integers;
- * the full roll works line by line in decimal.js. Both follow the same rules, so every
- * figure a curve point shows must equal the full roll's at that quantity, to the last
- * printed decimal. (Both sides are this engine: the outside checks of the figures are the
- * worked examples in cost-roll.test.ts and worked-example.test.ts.)
+ * The roll groups part lines and sums their goods as integers (the volume curve asks for
+ * totals only); the reference roll (`exactRanking`) works line by line in decimal.js. Both
+ * follow the same rules, so every figure a curve point shows must equal the reference's at
+ * that quantity, to the last printed decimal. (Both sides are this engine: the outside
+ * checks of the figures are the worked examples in cost-roll.test.ts and
+ * worked-example.test.ts; float-ranking.property.test.ts compares the lines.)
  */
 const point = (r: CostRollResult) => {
   const copy: Partial<CostRollResult> = { ...r };
@@ -18,12 +19,12 @@ const point = (r: CostRollResult) => {
   return copy;
 };
 
-describe('totals-only roll (volume curve) agrees with the line-by-line roll', () => {
+describe('totals-only roll (volume curve) agrees with the line-by-line reference roll', () => {
   it('same totals, breakdowns, warnings, left-out lines and FX rows at any quantity (fast-check)', () => {
     fc.assert(
       fc.property(costRollInputArb, fc.integer({ min: 1, max: 500_000 }), (input, qty) => {
         const prepared = prepareCostRoll(input);
-        const full = rollPrepared(prepared, qty);
+        const full = rollPrepared(prepared, qty, { exactRanking: true });
         const totalsOnly = rollPrepared(prepared, qty, { lines: false });
         expect(totalsOnly.lines).toEqual([]);
         expect(full.lineWarningCount).toBe(full.lines.reduce((n, l) => n + l.warnings.length, 0));

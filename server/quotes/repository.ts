@@ -19,9 +19,18 @@ export function quoteView(q: QuoteRow, on = today()): QuoteOut {
   };
 }
 
+/** A quote's breaks from the text its row carries ("minQty price minQty price …", ascending). */
+export function parseBreaksText(text: string | null): { minQty: number; unitPrice: string }[] {
+  const breaks: { minQty: number; unitPrice: string }[] = [];
+  const words = text ? text.split(' ') : [];
+  for (let i = 0; i < words.length; i += 2) breaks.push({ minQty: Number(words[i]), unitPrice: words[i + 1] });
+  return breaks;
+}
+
 /**
- * Quotes with their price breaks in two queries, whatever the number of quotes (the cost
- * roll and the quote board read through here too).
+ * Quotes with their price breaks in one query, whatever the number of quotes: each row
+ * carries its breaks (kept from price_breaks by a trigger), so a quote never arrives
+ * without the breaks it was saved with.
  */
 export async function loadQuotes(
   db: DbOrTrx,
@@ -37,18 +46,8 @@ export async function loadQuotes(
   if (filter.partIds) q.whereIn('quotes.partId', filter.partIds);
   if (filter.supplierId) q.andWhere('quotes.supplierId', filter.supplierId);
   if (filter.ids) q.whereIn('quotes.id', filter.ids);
-  const quotes = (await q) as (Omit<QuoteRow, 'priceBreaks'> & { priceBreaks?: QuoteRow['priceBreaks'] })[];
-  if (!quotes.length) return [];
-  // One row per quote with its breaks as arrays: a fifth of the rows for 5 breaks a quote,
-  // and one array parameter instead of thousands of placeholders for a large BOM.
-  const { rows } = (await db.raw(
-    `SELECT quote_id, array_agg(min_qty ORDER BY min_qty) AS min_qtys, array_agg(unit_price::text ORDER BY min_qty) AS prices
-       FROM price_breaks WHERE workspace_id = ? AND quote_id = ANY(?::bigint[]) GROUP BY quote_id`,
-    [workspaceId, quotes.map((x) => x.id)],
-  )) as { rows: { quoteId: string; minQtys: string[]; prices: string[] }[] };
-  const byQuote = new Map<string, QuoteRow['priceBreaks']>();
-  for (const r of rows) byQuote.set(r.quoteId, r.minQtys.map((q, i) => ({ minQty: Number(q), unitPrice: r.prices[i] })));
-  return quotes.map((x) => ({ ...x, moq: Number(x.moq), orderMultiple: Number(x.orderMultiple), priceBreaks: byQuote.get(x.id) ?? [] }));
+  const quotes = (await q) as (Omit<QuoteRow, 'priceBreaks'> & { breaksText: string | null })[];
+  return quotes.map(({ breaksText, ...x }) => ({ ...x, moq: Number(x.moq), orderMultiple: Number(x.orderMultiple), priceBreaks: parseBreaksText(breaksText) }));
 }
 
 export async function writeBreaks(db: DbOrTrx, workspaceId: string, quoteId: string, breaks: { minQty: number; unitPrice: string }[]) {
@@ -59,9 +58,8 @@ export async function writeBreaks(db: DbOrTrx, workspaceId: string, quoteId: str
 /**
  * The quotes of some parts as the costing engine takes them, for a cost roll of a large
  * BOM: only the fields it uses, the part ids as one array (given, or a BOM's), the breaks
- * as one "minQty price minQty price …" text per quote (no row per break, no array parsing)
- * read in the same query, so a quote never arrives without the breaks it was saved with,
- * and createdAt already as ISO text.
+ * as the one "minQty price minQty price …" text each quote row carries (no row per break,
+ * no aggregation at read time), and createdAt already as ISO text.
  */
 export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: string[] | { bomId: string }): Promise<CostingQuote[]> {
   if (Array.isArray(parts) && !parts.length) return [];
@@ -72,15 +70,12 @@ export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: 
   const { rows } = (await db.raw(
     `SELECT q.id, q.part_id, q.supplier_id, q.currency, q.incoterm, q.moq, q.order_multiple, q.lead_time_days, q.valid_from, q.valid_until,
             to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS created_at,
-            (SELECT string_agg(pb.min_qty || ' ' || pb.unit_price, ' ' ORDER BY pb.min_qty)
-               FROM price_breaks pb WHERE pb.quote_id = q.id AND pb.workspace_id = q.workspace_id) AS breaks
+            q.breaks_text AS breaks
        FROM quotes q WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) ORDER BY q.id`,
     [workspaceId, ...idParams],
   )) as { rows: Record<string, string | null>[] };
   return rows.map((q) => {
-    const priceBreaks: CostingQuote['priceBreaks'] = [];
-    const words = q.breaks ? q.breaks.split(' ') : [];
-    for (let i = 0; i < words.length; i += 2) priceBreaks.push({ minQty: Number(words[i]), unitPrice: words[i + 1] });
+    const priceBreaks = parseBreaksText(q.breaks);
     return {
       id: q.id!, partId: q.partId!, supplierId: q.supplierId!, currency: q.currency!, incoterm: q.incoterm as CostingQuote['incoterm'],
       moq: Number(q.moq), orderMultiple: Number(q.orderMultiple), leadTimeDays: q.leadTimeDays as unknown as number | null,

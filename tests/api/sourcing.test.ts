@@ -78,6 +78,29 @@ describe('suppliers and quotes', () => {
     expect(patched.body.priceBreaks).toHaveLength(2);
   });
 
+  it("a quote's breaks follow every write to price_breaks, however it is made (the cost roll reads the quote row's copy)", async () => {
+    const s = await makeSupplier(owner.agent);
+    const p = await makePart(owner.agent);
+    const a = await makeQuote(owner.agent, p.id, s.id, { priceBreaks: [{ minQty: 1, unitPrice: '0.002000' }] });
+    const b = await makeQuote(owner.agent, p.id, s.id, { priceBreaks: [{ minQty: 1, unitPrice: '0.003000' }] });
+    const db = t.database.db;
+    const breaksOf = async (id: string) => (await owner.agent.get(`/api/quotes/${id}`).expect(200)).body.priceBreaks;
+    // Written straight to the table, as the quote import does, several rows in one statement.
+    await db('price_breaks').insert([
+      { workspaceId: owner.workspace.id, quoteId: a.id, minQty: 1000, unitPrice: '0.001500' },
+      { workspaceId: owner.workspace.id, quoteId: a.id, minQty: 100, unitPrice: '0.001800' },
+    ]);
+    expect(await breaksOf(a.id)).toEqual([{ minQty: 1, unitPrice: '0.002000' }, { minQty: 100, unitPrice: '0.001800' }, { minQty: 1000, unitPrice: '0.001500' }]);
+    // A break moved to another quote changes both.
+    await db('price_breaks').where({ quoteId: a.id, minQty: 1000 }).update({ quoteId: b.id });
+    expect(await breaksOf(a.id)).toEqual([{ minQty: 1, unitPrice: '0.002000' }, { minQty: 100, unitPrice: '0.001800' }]);
+    expect(await breaksOf(b.id)).toEqual([{ minQty: 1, unitPrice: '0.003000' }, { minQty: 1000, unitPrice: '0.001500' }]);
+    await db('price_breaks').where({ quoteId: a.id }).andWhere('minQty', '>', 1).delete();
+    expect(await breaksOf(a.id)).toEqual([{ minQty: 1, unitPrice: '0.002000' }]);
+    const offers = await owner.agent.get(`/api/parts/${p.id}/offers`).query({ qty: 1000 }).expect(200);
+    expect(JSON.stringify(offers.body)).toContain('0.001500');
+  });
+
   it('a supplier with quotes cannot be deleted (409); a buyer may edit quotes, a designer may not', async () => {
     const s = await makeSupplier(owner.agent);
     const p = await makePart(owner.agent);

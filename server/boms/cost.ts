@@ -1,7 +1,7 @@
 import type { Deps } from '../deps';
 import type { DbOrTrx } from '../db/knex';
 import { errors } from '../http/errors';
-import { costRoll, volumeCurve, shelfLadder, prepareCostRoll, rollPrepared, CostingInputError, type CostRollResult } from '../costing';
+import { costRoll, volumeCurve, shelfLadder, prepareCostRoll, rollPrepared, CostingInputError, type CostRollLine, type CostRollResult } from '../costing';
 import { today } from '../quotes/repository';
 import { loadCostingData, type CostingData } from './inputs';
 import { getBom, type BomRow } from './repository';
@@ -15,19 +15,28 @@ function engine<T>(fn: () => T): T {
   }
 }
 
-/** Names beside ids, so the client and the export need no second lookup. */
+type NamedLine = CostRollLine & { internalPn: string | null; mpn: string | null; supplierName: string | null };
+
+/**
+ * Names beside ids, so the client and the export need no second lookup. The lines are the
+ * roll's own fresh objects, named in place: copying 10,000 of them cost more than naming.
+ */
 function decorate(data: CostingData, result: CostRollResult) {
   const parts = new Map(data.parts.map((p) => [p.id, p]));
   const suppliers = new Map(data.input.suppliers.map((s) => [s.id, s.name ?? '']));
+  const lines = result.lines as NamedLine[];
+  for (const l of lines) {
+    const p = l.partId ? parts.get(l.partId) : undefined;
+    l.internalPn = p?.internalPn ?? null;
+    l.mpn = p?.mpn ?? null;
+    l.supplierName = l.supplierId ? suppliers.get(l.supplierId) ?? null : null;
+  }
   return {
     ...result,
     bomId: data.bom.id,
     profileId: data.profile?.id ?? null,
     profileName: data.profile?.name ?? null,
-    lines: result.lines.map((l) => {
-      const p = l.partId ? parts.get(l.partId) : undefined;
-      return { ...l, internalPn: p?.internalPn ?? null, mpn: p?.mpn ?? null, supplierName: l.supplierId ? suppliers.get(l.supplierId) ?? null : null };
-    }),
+    lines,
     bySupplier: result.bySupplier.map((s) => ({ ...s, supplierName: suppliers.get(s.supplierId) ?? null })),
   };
 }

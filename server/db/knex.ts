@@ -45,6 +45,9 @@ export function createDb(connectionString: string, overrides: Partial<Knex.Confi
     postProcessResponse: (result) => {
       if (Array.isArray(result)) return result.map(camelizeRow);
       if (result && typeof result === 'object' && 'rows' in result && Array.isArray(result.rows)) {
+        // A raw query that names its columns in camelCase already ("partId") is left as it came.
+        const first = result.rows[0] as Record<string, unknown> | undefined;
+        if (first && typeof first === 'object' && Object.keys(first).every((k) => snakeToCamel(k) === k)) return result;
         return { ...result, rows: result.rows.map(camelizeRow) };
       }
       return camelizeRow(result);

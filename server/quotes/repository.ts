@@ -68,18 +68,17 @@ export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: 
   const ids = Array.isArray(parts) ? '?::bigint[]' : 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
   const idParams = Array.isArray(parts) ? [parts] : [workspaceId, parts.bomId];
   const { rows } = (await db.raw(
-    `SELECT q.id, q.part_id, q.supplier_id, q.currency, q.incoterm, q.moq, q.order_multiple, q.lead_time_days, q.valid_from, q.valid_until,
-            to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS created_at,
-            q.breaks_text AS breaks
+    `SELECT q.id, q.part_id AS "partId", q.supplier_id AS "supplierId", q.currency, q.incoterm, q.moq, q.order_multiple AS "orderMultiple",
+            q.lead_time_days AS "leadTimeDays", q.valid_from AS "validFrom", q.valid_until AS "validUntil",
+            to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS "createdAt", q.breaks_text AS "priceBreaks"
        FROM quotes q WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) ORDER BY q.id`,
     [workspaceId, ...idParams],
-  )) as { rows: Record<string, string | null>[] };
-  return rows.map((q) => {
-    const priceBreaks = parseBreaksText(q.breaks);
-    return {
-      id: q.id!, partId: q.partId!, supplierId: q.supplierId!, currency: q.currency!, incoterm: q.incoterm as CostingQuote['incoterm'],
-      moq: Number(q.moq), orderMultiple: Number(q.orderMultiple), leadTimeDays: q.leadTimeDays as unknown as number | null,
-      validFrom: q.validFrom, validUntil: q.validUntil, createdAt: q.createdAt, priceBreaks,
-    };
-  });
+  )) as { rows: Record<string, unknown>[] };
+  // The rows become the quotes in place: 40,000 of them are not copied.
+  for (const q of rows) {
+    q.moq = Number(q.moq);
+    q.orderMultiple = Number(q.orderMultiple);
+    q.priceBreaks = parseBreaksText(q.priceBreaks as string | null);
+  }
+  return rows as unknown as CostingQuote[];
 }

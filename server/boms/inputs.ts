@@ -20,8 +20,8 @@ async function inParallel<T extends readonly (() => Promise<unknown>)[]>(db: DbO
 }
 
 /** What the cost roll and the costed workbook read of a line. */
-const LINE_COLUMNS = ['id', 'kind', 'refDes', 'partId', 'qtyPerUnit', 'attritionPct', 'pinnedQuoteId', 'dnp', 'note', 'unitCost', 'oneTimeCost', 'currency', 'unresolved'] as const;
-export type CostingLine = Pick<LineRow, (typeof LINE_COLUMNS)[number]>;
+const COSTING_LINE_COLUMNS = ['id', 'kind', 'refDes', 'partId', 'qtyPerUnit', 'attritionPct', 'pinnedQuoteId', 'dnp', 'note', 'unitCost', 'oneTimeCost', 'currency', 'unresolved'] as const;
+export type CostingLine = Pick<LineRow, (typeof COSTING_LINE_COLUMNS)[number]>;
 
 export interface CostingData {
   bom: BomRow;
@@ -42,7 +42,7 @@ export async function loadCostingData(db: DbOrTrx, workspaceId: string, bom: Bom
   const bomParts = 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
   const [lines, parts, quotes, suppliers, profile, fxRates, pivot] = await inParallel(db, [
     // Only the columns read: a 10,000-line BOM's timestamps alone took longer to parse than the rest.
-    () => scoped(db, 'bom_lines', workspaceId).andWhere({ bomId: bom.id }).orderBy([{ column: 'position' }, { column: 'id' }]).select(LINE_COLUMNS) as unknown as Promise<CostingLine[]>,
+    () => scoped(db, 'bom_lines', workspaceId).andWhere({ bomId: bom.id }).orderBy([{ column: 'position' }, { column: 'id' }]).select(COSTING_LINE_COLUMNS) as unknown as Promise<CostingLine[]>,
     () => scoped(db, 'parts', workspaceId)
       .andWhereRaw(`id = ANY(${bomParts})`, [workspaceId, bom.id])
       .select('id', 'internalPn', 'mpn', 'manufacturer', 'category', 'mount', 'pins', 'hsCode', 'unitWeightG') as Promise<CostingData['parts']>,

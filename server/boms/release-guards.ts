@@ -2,7 +2,7 @@ import type { Deps } from '../deps';
 import type { Auth } from '../http/route';
 import type { DbOrTrx, Trx } from '../db/knex';
 import type { BomRow } from './repository';
-import { stressTallies, assertReleasable } from '../stress/service';
+import { stressCheckOf, assertReleasable } from '../stress/service';
 import { assertAllowed } from '../billing/plan';
 import { HttpError } from '../http/errors';
 
@@ -11,12 +11,12 @@ import { HttpError } from '../http/errors';
  * veto on release, and (with plans) the limit on creating BOMs.
  */
 export const releaseGuards = {
-  /** The stress tally of one BOM (stored with its roll-up); null without a stress policy. */
-  tally: async (db: DbOrTrx, workspaceId: string, bom: BomRow) => {
+  /** The stress check of one BOM without waivers (stored with its roll-up); null without a stress policy. */
+  stressCheck: async (db: DbOrTrx, workspaceId: string, bom: BomRow) => {
     try {
-      return (await stressTallies(db, workspaceId, [bom])).get(bom.id) ?? null;
+      return await stressCheckOf(db, workspaceId, bom);
     } catch (err) {
-      // No stress policy in the workspace: nothing to tally, and the cost roll must not fail for it.
+      // No stress policy in the workspace: nothing to check, and the cost roll must not fail for it.
       if (err instanceof HttpError && err.status === 409) return null;
       throw err;
     }

@@ -101,6 +101,12 @@ export async function editableBom(db: DbOrTrx, workspaceId: string, id: string, 
   return row;
 }
 
+const LINE_COLUMNS: (keyof LineRow)[] = [
+  'id', 'bomId', 'position', 'kind', 'refDes', 'partId', 'qtyPerUnit', 'attritionPct', 'pinnedQuoteId', 'dnp', 'note',
+  'unitCost', 'oneTimeCost', 'currency', 'opVoltageV', 'opCurrentA', 'opPowerW', 'opAmbientC', 'unresolved', 'version',
+];
+
+/** A BOM's lines in order; the row timestamps are left out (parsing them was a third of reading 1,000 lines). */
 export function linesOf(db: DbOrTrx, workspaceId: string, bomId: string): Promise<LineRow[]> {
-  return scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }]) as unknown as Promise<LineRow[]>;
+  return scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }]).select(LINE_COLUMNS) as unknown as Promise<LineRow[]>;
 }

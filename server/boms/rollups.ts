@@ -6,9 +6,16 @@ import { today } from '../quotes/repository';
 import { costOf, costTotalsOf, type CostView } from './cost';
 import type { BomRow } from './repository';
 import { releaseGuards } from './release-guards';
+import { RawJson } from '../http/raw-json';
+import { hasWaivers, stressOf, withWaivers, type StressCheckView } from '../stress/service';
 
-/** The stress tally kept with a roll-up (`tally` null: the workspace has no stress policy). */
-export type StoredStress = { tally: Awaited<ReturnType<typeof releaseGuards.tally>> };
+type StressCheck = NonNullable<Awaited<ReturnType<typeof releaseGuards.stressCheck>>>;
+
+/**
+ * The stress check kept with a roll-up, without waivers (they are read per request), and
+ * its tally for the BOM list; both null when the workspace has no stress policy.
+ */
+export type StoredStress = { tally: StressCheck['summary'] | null; check: StressCheck | null };
 
 export const ROLLUP_QUEUE = 'cost-rollup';
 
@@ -24,8 +31,10 @@ export interface RollupRow {
   leftOut: number;
   warnings: number;
   totals: unknown;
-  /** Null on a roll-up stored before tallies were kept. */
-  stress: StoredStress | null;
+  /** The stored stress tally; null without a stress policy. */
+  stressTally: StoredStress['tally'];
+  /** False on a roll-up stored before stress tallies were kept. */
+  hasStress: boolean;
   computedAt?: Date;
 }
 
@@ -59,8 +68,8 @@ async function computeRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?:
   const running = inFlight.get(key);
   if (running) return running;
   const work = (async () => {
-    const [cost, tally] = await Promise.all([costOf(db, workspaceId, bom), releaseGuards.tally(db, workspaceId, bom)]);
-    const stress: StoredStress = { tally };
+    const [cost, check] = await Promise.all([costOf(db, workspaceId, bom), releaseGuards.stressCheck(db, workspaceId, bom)]);
+    const stress: StoredStress = { tally: check?.summary ?? null, check };
     const row = {
       bomId: bom.id, workspaceId, epoch: e, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency,
       landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
@@ -83,7 +92,9 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   const epoch = await epochOf(deps.db, workspaceId);
   const stored = boms.length
     ? ((await scoped(deps.db, 'cost_rollups', workspaceId).andWhereRaw('bom_id = ANY(?::bigint[])', [boms.map((b) => b.id)])
-      .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'stress', 'computedAt')) as RollupRow[])
+      .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'computedAt',
+        // The tally only: the stored check of a large BOM is far larger than the list needs.
+        deps.db.raw(`stress -> 'tally' AS stress_tally`), deps.db.raw('stress IS NOT NULL AS has_stress'))) as RollupRow[])
     : [];
   const byBom = new Map(stored.map((r) => [r.bomId, r]));
   const out = new Map<string, RollupRow & { fresh: boolean }>();
@@ -92,7 +103,7 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
     const r = byBom.get(bom.id);
     // A stored roll-up is served even when stale (and refreshed behind); one that never
     // existed, or that was stored before tallies were kept, is computed now.
-    if (r && r.stress) {
+    if (r && r.hasStress) {
       const fresh = isFresh(r, epoch, bom);
       stale ||= !fresh;
       out.set(bom.id, { ...r, fresh });
@@ -101,21 +112,36 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
     const { cost, stress } = await computeRollup(deps.db, workspaceId, bom, epoch);
     out.set(bom.id, {
       bomId: bom.id, workspaceId, epoch, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency, landedPerUnit: cost.totals.landedPerUnit,
-      targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count, warnings: cost.warnings.length + cost.lineWarningCount, totals: cost.totals, stress, fresh: true,
+      targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count, warnings: cost.warnings.length + cost.lineWarningCount, totals: cost.totals,
+      stressTally: stress.tally, hasStress: true, fresh: true,
     });
   }
   if (stale) await queueRefresh(deps, workspaceId);
   return out;
 }
 
-/** The cost roll at the planned quantity today: the stored one when fresh, else computed and stored. */
-export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView> {
-  const epoch = await epochOf(deps.db, workspaceId);
-  const r = await scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
-    .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'result');
-  // A result stored before `lineWarningCount` existed is computed again.
-  if (r?.result && isFresh(r, epoch, bom) && typeof (r.result as CostView).lineWarningCount === 'number') return r.result as CostView;
-  return refreshRollup(deps.db, workspaceId, bom, epoch);
+type StoredText = { epoch: string; costingDate: string; qty: number; complete: boolean; text: string | null };
+
+/** One stored part of a BOM's roll-up as JSON text, with what says whether it is fresh. */
+async function storedText(deps: Deps, workspaceId: string, bom: BomRow, text: string): Promise<{ epoch: string; stored: StoredText | undefined }> {
+  const [epoch, stored] = await Promise.all([
+    epochOf(deps.db, workspaceId),
+    scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
+      // A result stored before `lineWarningCount` existed is computed again.
+      .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`jsonb_exists(result, 'lineWarningCount') AS complete`), deps.db.raw(`${text} AS text`)) as Promise<StoredText | undefined>,
+  ]);
+  return { epoch, stored };
+}
+
+const freshText = (s: StoredText | undefined, epoch: string, bom: BomRow) => (s?.text && s.complete && isFresh(s, epoch, bom) ? new RawJson(s.text) : null);
+
+/**
+ * The cost roll at the planned quantity today: the stored one when fresh (sent as the text
+ * it is stored as), else computed and stored.
+ */
+export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView | RawJson> {
+  const { epoch, stored } = await storedText(deps, workspaceId, bom, 'result::text');
+  return freshText(stored, epoch, bom) ?? refreshRollup(deps.db, workspaceId, bom, epoch);
 }
 
 /**
@@ -123,15 +149,24 @@ export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow):
  * without its lines when fresh, else the totals-only roll (not stored: the refresh it
  * queues stores the whole one).
  */
-export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView> {
-  const epoch = await epochOf(deps.db, workspaceId);
-  const r = (await scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
-    .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`result - 'lines' AS result`))) as
-    | { epoch: string; costingDate: string; qty: number; result: CostView | null }
-    | undefined;
-  if (r?.result && isFresh(r, epoch, bom) && typeof r.result.lineWarningCount === 'number') return { ...r.result, lines: [] };
+export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView | RawJson> {
+  const { epoch, stored } = await storedText(deps, workspaceId, bom, `jsonb_set(result, '{lines}', '[]')::text`);
+  const fresh = freshText(stored, epoch, bom);
+  if (fresh) return fresh;
   await queueRefresh(deps, workspaceId);
   return costTotalsOf(deps.db, workspaceId, bom);
+}
+
+/**
+ * The stress check: the one stored with a fresh roll-up, with the waivers read now (sent
+ * as stored when the BOM has none), else checked now and a refresh queued.
+ */
+export async function plannedStress(deps: Deps, workspaceId: string, bom: BomRow): Promise<StressCheckView | RawJson> {
+  const [{ epoch, stored }, waived] = await Promise.all([storedText(deps, workspaceId, bom, `(stress -> 'check')::text`), hasWaivers(deps.db, workspaceId, bom.id)]);
+  const fresh = freshText(stored, epoch, bom);
+  if (fresh && fresh.text !== 'null') return waived ? withWaivers(deps.db, workspaceId, JSON.parse(fresh.text) as StressCheckView) : fresh;
+  if (!stored || !isFresh(stored, epoch, bom)) await queueRefresh(deps, workspaceId);
+  return stressOf(deps.db, workspaceId, bom);
 }
 
 /** Queues one refresh of a workspace's stale roll-ups (at most one waiting per workspace). */

@@ -43,7 +43,7 @@ export const bomRoutes: RouteDef[] = [
             ...bomView(b),
             lineCount: lineCount.get(b.id) ?? 0,
             cost: r ? { qty: r.qty, currency: r.currency, landedPerUnit: r.landedPerUnit, leftOut: r.leftOut, warnings: r.warnings, costingDate: r.costingDate, fresh: r.fresh } : null,
-            stress: r?.stress?.tally ?? null,
+            stress: r?.stressTally ?? null,
           };
         }),
         nextCursor: null,

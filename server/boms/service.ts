@@ -134,12 +134,7 @@ export async function newRevisionIn(trx: Trx, auth: Auth, bomId: string) {
     const lines = await linesOf(trx, auth.workspaceId, bomId);
     for (let i = 0; i < lines.length; i += 1000) {
       await trx('bom_lines').insert(
-        lines.slice(i, i + 1000).map(({ id: _lid, bomId: _b, version: _lv, ...l }) => {
-          const rest = { ...l } as Record<string, unknown>;
-          delete rest.createdAt;
-          delete rest.updatedAt;
-          return { ...rest, workspaceId: auth.workspaceId, bomId: row.id };
-        }),
+        lines.slice(i, i + 1000).map(({ id: _lid, bomId: _b, version: _lv, ...l }) => ({ ...l, workspaceId: auth.workspaceId, bomId: row.id })),
       );
     }
     await audit(trx, { workspaceId: auth.workspaceId, userId: auth.userId, action: 'revision', entity: 'bom', entityId: row.id, changes: { from: bomId, revision: row.revision } });

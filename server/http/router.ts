@@ -5,6 +5,7 @@ import { errors } from './errors';
 import type { RouteDef } from './route';
 import { parseInput } from './validate';
 import { readUpload } from './upload';
+import { RawJson } from './raw-json';
 
 type Middleware = (req: Request, res: Response, next: NextFunction) => void;
 
@@ -14,8 +15,8 @@ const hasBody = (body: unknown) =>
 
 /**
  * Mounts the route table: for each route, access first (401, then 403), then input
- * validation (400), then the handler. A handler's return value is the JSON body;
- * `undefined` answers 204.
+ * validation (400), then the handler. A handler's return value is the JSON body (a
+ * `RawJson` is sent as the text it holds); `undefined` answers 204.
  */
 export function buildRouter(routes: RouteDef[], deps: Deps, limiters: { auth: Middleware }): Router {
   const router = Router();
@@ -41,6 +42,7 @@ export function buildRouter(routes: RouteDef[], deps: Deps, limiters: { auth: Mi
         if (auth && def.method !== 'get' && res.statusCode < 400) deps.afterWrite?.(auth.workspaceId);
         if (res.headersSent) return;
         if (result === undefined) res.status(def.status ?? 204).end();
+        else if (result instanceof RawJson) res.status(def.status ?? 200).type('application/json').send(result.text);
         else res.status(def.status ?? 200).json(result);
       } catch (err) {
         next(err);

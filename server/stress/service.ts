@@ -19,11 +19,11 @@ export interface WaiverRow {
 
 export const operatingPointOf = (l: LineRow) => ({ voltageV: l.opVoltageV, currentA: l.opCurrentA, powerW: l.opPowerW, ambientC: l.opAmbientC });
 
-type PartInfo = { id: string; category: string; ratings: Record<string, unknown>; internalPn: string; mpn: string; updatedAt: Date };
+type PartInfo = { id: string; category: string; ratings: Record<string, unknown>; internalPn: string; mpn: string };
 
 async function partsById(db: DbOrTrx, workspaceId: string, ids: string[]) {
   if (!ids.length) return new Map<string, PartInfo>();
-  const rows = (await scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [ids]).select('id', 'category', 'ratings', 'internalPn', 'mpn', 'updatedAt')) as PartInfo[];
+  const rows = (await scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [ids]).select('id', 'category', 'ratings', 'internalPn', 'mpn')) as PartInfo[];
   return new Map(rows.map((p) => [p.id, p]));
 }
 
@@ -36,30 +36,21 @@ export function stressInputs(lines: LineRow[], parts: Map<string, PartInfo>): St
     });
 }
 
-/** The stress check of one BOM under its policy, with each line's part and any waiver. */
-export async function stressOf(db: DbOrTrx, workspaceId: string, bom: BomRow) {
-  const [lines, policy, waivers] = await Promise.all([
-    linesOf(db, workspaceId, bom.id),
-    policyFor(db, workspaceId, bom.stressPolicyId),
-    scoped(db, 'stress_waivers', workspaceId).andWhere({ bomId: bom.id })
-      .leftJoin('users', 'users.id', 'stress_waivers.waivedBy')
-      .orderBy('stress_waivers.id', 'desc')
-      .select('stress_waivers.id', 'stress_waivers.lineId', 'stress_waivers.policyId', 'stress_waivers.reason', 'stress_waivers.waivedBy', 'users.name as waivedByName', 'stress_waivers.createdAt') as Promise<WaiverRow[]>,
-  ]);
+export interface WaiverView {
+  id: string;
+  reason: string;
+  waivedBy: string | null;
+  createdAt: string;
+}
+
+/**
+ * The stress check of one BOM under its policy, each line with its part's names and no
+ * waiver yet: everything here follows the costing epoch, so the roll-up stores it.
+ */
+export async function stressCheckOf(db: DbOrTrx, workspaceId: string, bom: BomRow) {
+  const [lines, policy] = await Promise.all([linesOf(db, workspaceId, bom.id), policyFor(db, workspaceId, bom.stressPolicyId)]);
   const parts = await partsById(db, workspaceId, [...new Set(lines.map((l) => l.partId).filter((x): x is string => Boolean(x)))]);
   const result = checkBom({ lines: stressInputs(lines, parts), policy: { id: policy.id, name: policy.name, limits: policy.limits }, bomAmbientC: Number(bom.ambientC) });
-  // A waiver lapses when what it waived changes: the line (operating point, part), the
-  // part's ratings, or the policy.
-  const lineById = new Map(lines.map((l) => [l.id, l]));
-  const waiverOf = new Map<string, WaiverRow>();
-  for (const w of waivers) {
-    if (waiverOf.has(w.lineId)) continue;
-    const line = lineById.get(w.lineId);
-    const part = line?.partId ? parts.get(line.partId) : undefined;
-    const at = new Date(w.createdAt).getTime();
-    const stillHolds = line && w.policyId === policy.id && at >= new Date((line as LineRow & { updatedAt: Date }).updatedAt).getTime() && (!part || at >= new Date(part.updatedAt).getTime());
-    if (stillHolds) waiverOf.set(w.lineId, w);
-  }
   return {
     ...result,
     bomId: bom.id,
@@ -67,31 +58,54 @@ export async function stressOf(db: DbOrTrx, workspaceId: string, bom: BomRow) {
     ambientC: Number(bom.ambientC),
     lines: result.lines.map((l) => {
       const p = l.partId ? parts.get(l.partId) : undefined;
-      const w = waiverOf.get(l.lineId);
-      return {
-        ...l,
-        internalPn: p?.internalPn ?? null,
-        mpn: p?.mpn ?? null,
-        waiver: w ? { id: w.id, reason: w.reason, waivedBy: w.waivedByName, createdAt: new Date(w.createdAt).toISOString() } : null,
-      };
+      return { ...l, internalPn: p?.internalPn ?? null, mpn: p?.mpn ?? null, waiver: null as WaiverView | null };
     }),
   };
 }
 
-/** Tallies for the BOM list, in a fixed number of queries for all BOMs. */
-export async function stressTallies(db: DbOrTrx, workspaceId: string, boms: BomRow[]): Promise<Map<string, StressCheckResult['summary']>> {
-  const out = new Map<string, StressCheckResult['summary']>();
-  if (!boms.length) return out;
-  const lines = (await scoped(db, 'bom_lines', workspaceId).andWhereRaw('bom_id = ANY(?::bigint[])', [boms.map((b) => b.id)])) as LineRow[];
-  const parts = await partsById(db, workspaceId, [...new Set(lines.map((l) => l.partId).filter((x): x is string => Boolean(x)))]);
-  const policies = new Map<string | null, PolicyRow>();
-  for (const bom of boms) {
-    if (!policies.has(bom.stressPolicyId)) policies.set(bom.stressPolicyId, await policyFor(db, workspaceId, bom.stressPolicyId));
-    const policy = policies.get(bom.stressPolicyId)!;
-    const mine = lines.filter((l) => l.bomId === bom.id);
-    out.set(bom.id, checkBom({ lines: stressInputs(mine, parts), policy: { id: policy.id, name: policy.name, limits: policy.limits }, bomAmbientC: Number(bom.ambientC) }).summary);
+export type StressCheckView = Awaited<ReturnType<typeof stressCheckOf>>;
+
+export function hasWaivers(db: DbOrTrx, workspaceId: string, bomId: string): Promise<boolean> {
+  return scoped(db, 'stress_waivers', workspaceId).andWhere({ bomId }).first('id').then(Boolean);
+}
+
+/**
+ * The check with the waivers that still hold. A waiver lapses when what it waived changes:
+ * the line (operating point, part), the part's ratings, or the policy.
+ */
+export async function withWaivers(db: DbOrTrx, workspaceId: string, check: StressCheckView): Promise<StressCheckView> {
+  const waivers = (await scoped(db, 'stress_waivers', workspaceId).andWhere({ bomId: check.bomId })
+    .leftJoin('users', 'users.id', 'stress_waivers.waivedBy')
+    .orderBy('stress_waivers.id', 'desc')
+    .select('stress_waivers.id', 'stress_waivers.lineId', 'stress_waivers.policyId', 'stress_waivers.reason', 'stress_waivers.waivedBy', 'users.name as waivedByName', 'stress_waivers.createdAt')) as WaiverRow[];
+  if (!waivers.length) return check;
+  const lineIds = [...new Set(waivers.map((w) => w.lineId))];
+  const lines = (await scoped(db, 'bom_lines', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [lineIds]).select('id', 'partId', 'updatedAt')) as { id: string; partId: string | null; updatedAt: Date }[];
+  const partIds = [...new Set(lines.map((l) => l.partId).filter((x): x is string => Boolean(x)))];
+  const parts = partIds.length ? ((await scoped(db, 'parts', workspaceId).andWhereRaw('id = ANY(?::bigint[])', [partIds]).select('id', 'updatedAt')) as { id: string; updatedAt: Date }[]) : [];
+  const lineById = new Map(lines.map((l) => [l.id, l]));
+  const partChanged = new Map(parts.map((p) => [p.id, new Date(p.updatedAt).getTime()]));
+  const waiverOf = new Map<string, WaiverRow>();
+  for (const w of waivers) {
+    if (waiverOf.has(w.lineId)) continue;
+    const line = lineById.get(w.lineId);
+    const at = new Date(w.createdAt).getTime();
+    const partAt = line?.partId ? partChanged.get(line.partId) : undefined;
+    const stillHolds = line && w.policyId === check.policyId && at >= new Date(line.updatedAt).getTime() && (partAt === undefined || at >= partAt);
+    if (stillHolds) waiverOf.set(w.lineId, w);
   }
-  return out;
+  return {
+    ...check,
+    lines: check.lines.map((l) => {
+      const w = waiverOf.get(l.lineId);
+      return w ? { ...l, waiver: { id: w.id, reason: w.reason, waivedBy: w.waivedByName, createdAt: new Date(w.createdAt).toISOString() } } : l;
+    }),
+  };
+}
+
+/** The stress check of one BOM under its policy, with each line's part and any waiver. */
+export async function stressOf(db: DbOrTrx, workspaceId: string, bom: BomRow): Promise<StressCheckView> {
+  return withWaivers(db, workspaceId, await stressCheckOf(db, workspaceId, bom));
 }
 
 /**

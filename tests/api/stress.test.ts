@@ -48,6 +48,30 @@ describe('the stress check', () => {
     expect(list.stress).toEqual({ clear: 0, close: 1, beyondPolicy: 1, overRating: 0, needsData: 0 });
   });
 
+  it('the check stored with the roll-up answers as the live one, with waivers read at request time', async () => {
+    const d = ws.agents.designer;
+    const disc = (await d.get(`/api/boms/${bomId}/lines`)).body.items.find((l: { id: string }) => l.id === capLine.id);
+    const id = (await d.post('/api/boms').send({ name: 'Ioniser stored check', reportingCurrency: 'USD', plannedQty: 1000, ambientC: '40' }).expect(201)).body.id;
+    const line = (await d.post(`/api/boms/${id}/lines`).send({ refDes: 'C9', partId: disc.partId, qtyPerUnit: '1', operatingPoint: { voltageV: '1.5kV' } }).expect(201)).body;
+    const db = t.database.db;
+    // Live: no roll-up stored.
+    await db('cost_rollups').where({ bomId: id }).delete();
+    const live = (await ws.agents.viewer.get(`/api/boms/${id}/stress`).expect(200)).body;
+    // Stored: the cost roll at the planned quantity stores the roll-up with the check.
+    await ws.agents.viewer.get(`/api/boms/${id}/cost`).expect(200);
+    const row = await db('cost_rollups').where({ bomId: id }).first(db.raw(`stress -> 'check' -> 'summary' AS summary`));
+    expect(row.summary).toEqual(live.summary);
+    const stored = await ws.agents.viewer.get(`/api/boms/${id}/stress`).expect(200);
+    expect(stored.headers['content-type']).toMatch(/application\/json/);
+    expect(stored.body).toEqual(live);
+    expect(stored.body.lines[0]).toMatchObject({ lineId: line.id, internalPn: 'C-1N-2KV', status: 'beyond_policy', waiver: null });
+    // A waiver is not a costing input: the roll-up stays fresh and the waiver shows on it.
+    await d.post(`/api/boms/${id}/lines/${line.id}/waivers`).send({ reason: 'Potted module; approved after the humidity test.' }).expect(201);
+    const waived = (await ws.agents.viewer.get(`/api/boms/${id}/stress`).expect(200)).body;
+    expect(waived.lines[0].waiver).toMatchObject({ reason: 'Potted module; approved after the humidity test.', waivedBy: expect.any(String) });
+    expect((await db('cost_rollups').where({ bomId: id }).first(db.raw(`stress -> 'check' -> 'summary' AS summary`))).summary).toEqual(live.summary);
+  });
+
   it('blocks release over the absolute rating; beyond policy needs a written waiver, kept in the audit log', async () => {
     const d = ws.agents.designer;
     const chip = (await d.get(`/api/boms/${bomId}/lines`)).body.items.find((l: { id: string }) => l.id === chipLine.id);

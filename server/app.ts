@@ -78,6 +78,9 @@ export function createApp(opts: AppOptions): FarthingApp {
 
   const app = express();
   app.disable('x-powered-by');
+  // No ETag on API answers: they are computed per request, and hashing a 1 MB cost roll to
+  // tag it cost more than a revalidation saves. Static files keep theirs (serve-static).
+  app.disable('etag');
   if (config.PUBLIC_URL.startsWith('https://')) app.set('trust proxy', 1);
   app.use(helmet());
   app.use(

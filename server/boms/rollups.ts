@@ -87,16 +87,21 @@ async function computeRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?:
   }
 }
 
-/** For the BOM list: stored roll-ups, computing only those that never existed. */
-export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]) {
-  const epoch = await epochOf(deps.db, workspaceId);
-  const stored = boms.length
-    ? ((await scoped(deps.db, 'cost_rollups', workspaceId).andWhereRaw('bom_id = ANY(?::bigint[])', [boms.map((b) => b.id)])
+/** The workspace's stored roll-ups (no results: what the BOM list shows) and its costing epoch. */
+export async function storedRollups(deps: Deps, workspaceId: string) {
+  const [epoch, stored] = await Promise.all([
+    epochOf(deps.db, workspaceId),
+    scoped(deps.db, 'cost_rollups', workspaceId)
       .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'computedAt',
         // The tally only: the stored check of a large BOM is far larger than the list needs.
-        deps.db.raw(`stress -> 'tally' AS stress_tally`), deps.db.raw('stress IS NOT NULL AS has_stress'))) as RollupRow[])
-    : [];
-  const byBom = new Map(stored.map((r) => [r.bomId, r]));
+        deps.db.raw(`stress -> 'tally' AS stress_tally`), deps.db.raw('stress IS NOT NULL AS has_stress')) as Promise<RollupRow[]>,
+  ]);
+  return { epoch, byBom: new Map(stored.map((r) => [r.bomId, r])) };
+}
+
+/** For the BOM list: stored roll-ups, computing only those that never existed. */
+export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[], read?: Awaited<ReturnType<typeof storedRollups>>) {
+  const { epoch, byBom } = read ?? (await storedRollups(deps, workspaceId));
   const out = new Map<string, RollupRow & { fresh: boolean }>();
   let stale = false;
   for (const bom of boms) {

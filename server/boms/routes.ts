@@ -11,7 +11,7 @@ import { audit } from '../audit/repository';
 import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
 import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
-import { rollupsFor, plannedCost, plannedTotals } from './rollups';
+import { rollupsFor, storedRollups, plannedCost, plannedTotals } from './rollups';
 import { releaseGuards } from './release-guards';
 import { today } from '../quotes/repository';
 import { importBom } from './import';
@@ -32,9 +32,13 @@ export const bomRoutes: RouteDef[] = [
     handler: async ({ auth, query, deps }) => {
       const q = scoped(deps.db, 'boms', auth.workspaceId).orderBy([{ column: 'name' }, { column: 'revision', order: 'desc' }]);
       if (query.q) q.andWhere('name', 'ilike', `%${query.q.replace(/[%_\\]/g, '\\$&')}%`);
-      const boms = (await q) as BomRow[];
-      const rollups = await rollupsFor(deps, auth.workspaceId, boms);
-      const counts = (await scoped(deps.db, 'bom_lines', auth.workspaceId).groupBy('bomId').select('bomId').count('* as n')) as { bomId: string; n: string }[];
+      // Side by side: under load each sequential round trip waits its turn.
+      const [boms, counts, stored] = await Promise.all([
+        q as Promise<BomRow[]>,
+        scoped(deps.db, 'bom_lines', auth.workspaceId).groupBy('bomId').select('bomId').count('* as n') as Promise<{ bomId: string; n: string }[]>,
+        storedRollups(deps, auth.workspaceId),
+      ]);
+      const rollups = await rollupsFor(deps, auth.workspaceId, boms, stored);
       const lineCount = new Map(counts.map((c) => [c.bomId, Number(c.n)]));
       return {
         items: boms.map((b) => {
@@ -115,8 +119,9 @@ export const bomRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/lines', access: 'boms.read', tag: 'Lines',
     summary: 'The lines of a BOM in order.', params: idParams,
     handler: async ({ auth, params, deps }) => {
-      await getBom(deps.db, auth.workspaceId, params.id);
-      return { items: (await linesOf(deps.db, auth.workspaceId, params.id)).map(lineView), nextCursor: null };
+      // The BOM is read beside its lines only for the 404 of a missing one.
+      const [, lines] = await Promise.all([getBom(deps.db, auth.workspaceId, params.id), linesOf(deps.db, auth.workspaceId, params.id)]);
+      return { items: lines.map(lineView), nextCursor: null };
     },
   }),
   route({

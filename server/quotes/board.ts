@@ -20,20 +20,19 @@ export interface BoardQuery {
  * BOM's cost roll). Reads its data in a fixed number of queries.
  */
 export async function offersForPart(deps: Deps, workspaceId: string, partId: string, query: BoardQuery) {
-  const part = await getOrNotFound<{ id: string; hsCode: string | null }>(deps.db, 'parts', workspaceId, partId, 'part');
-  let profile: ProfileRow | undefined;
-  if (query.profileId) {
-    profile = await getProfile(deps.db, workspaceId, query.profileId);
-    if (!profile) throw errors.validation('No such landed-cost profile in this workspace.', [{ path: 'profileId', message: 'refers to a missing profile' }]);
-  } else {
-    profile = await firstProfile(deps.db, workspaceId);
-  }
   const date = query.date ?? today();
+  // Every read side by side: under load each sequential round trip waits its turn.
+  const [part, profile, quotes, suppliers, fxRates, pivot] = await Promise.all([
+    getOrNotFound<{ id: string; hsCode: string | null }>(deps.db, 'parts', workspaceId, partId, 'part'),
+    query.profileId ? getProfile(deps.db, workspaceId, query.profileId) : firstProfile(deps.db, workspaceId),
+    loadQuotes(deps.db, workspaceId, { partIds: [partId] }),
+    // All the workspace's suppliers (tens, not thousands): no wait for the quotes first.
+    scoped(deps.db, 'suppliers', workspaceId).select('id', 'active', 'name') as Promise<{ id: string; active: boolean; name: string }[]>,
+    ratesAsOf(deps.db, workspaceId, date),
+    pivotOf(deps.db, workspaceId),
+  ]);
+  if (query.profileId && !profile) throw errors.validation('No such landed-cost profile in this workspace.', [{ path: 'profileId', message: 'refers to a missing profile' }]);
   const currency = query.currency ?? profile?.currency ?? 'USD';
-  const quotes = await loadQuotes(deps.db, workspaceId, { partIds: [partId] });
-  const supplierIds = [...new Set(quotes.map((q) => q.supplierId))];
-  const suppliers = supplierIds.length ? await scoped(deps.db, 'suppliers', workspaceId).whereIn('id', supplierIds).select('id', 'active', 'name') : [];
-  const [fxRates, pivot] = await Promise.all([ratesAsOf(deps.db, workspaceId, date), pivotOf(deps.db, workspaceId)]);
   try {
     const board = quoteBoard({
       partId, qty: query.qty, date, currency, profile: profile ?? {}, part: { hsCode: part.hsCode },

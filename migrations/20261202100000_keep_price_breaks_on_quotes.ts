@@ -7,7 +7,10 @@ import type { Knex } from 'knex';
  * aggregating the breaks per quote at read time was most of that read. price_breaks stays
  * the table every write goes to; this column is only a copy for reading.
  */
+// The quotes are locked first: a concurrent writer of the same quote's breaks then finishes
+// before the UPDATE, whose new snapshot (read committed) sees that writer's rows too.
 const refresh = (idsFrom: string) => `
+  PERFORM 1 FROM quotes WHERE id IN (${idsFrom}) ORDER BY id FOR UPDATE;
   UPDATE quotes q
      SET breaks_text = (SELECT string_agg(pb.min_qty || ' ' || pb.unit_price, ' ' ORDER BY pb.min_qty)
                           FROM price_breaks pb WHERE pb.quote_id = q.id)
@@ -34,11 +37,23 @@ export async function up(knex: Knex): Promise<void> {
     REFERENCING OLD TABLE AS changed FOR EACH STATEMENT EXECUTE FUNCTION keep_quote_breaks()`);
   await knex.raw(`CREATE TRIGGER price_breaks_keep_quote_update AFTER UPDATE ON price_breaks
     REFERENCING OLD TABLE AS was NEW TABLE AS changed FOR EACH STATEMENT EXECUTE FUNCTION keep_quote_breaks_on_update()`);
-  await knex.raw(refresh('SELECT quote_id FROM price_breaks'));
+  await knex.raw(`
+    CREATE FUNCTION clear_quote_breaks() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      UPDATE quotes SET breaks_text = NULL WHERE breaks_text IS NOT NULL;
+      RETURN NULL;
+    END $$`);
+  await knex.raw(`CREATE TRIGGER price_breaks_keep_quote_truncate AFTER TRUNCATE ON price_breaks
+    FOR EACH STATEMENT EXECUTE FUNCTION clear_quote_breaks()`);
+  await knex.raw(`
+    UPDATE quotes q
+       SET breaks_text = (SELECT string_agg(pb.min_qty || ' ' || pb.unit_price, ' ' ORDER BY pb.min_qty)
+                            FROM price_breaks pb WHERE pb.quote_id = q.id)`);
 }
 
 export async function down(knex: Knex): Promise<void> {
-  for (const event of ['insert', 'delete', 'update']) await knex.raw(`DROP TRIGGER price_breaks_keep_quote_${event} ON price_breaks`);
+  for (const event of ['insert', 'delete', 'update', 'truncate']) await knex.raw(`DROP TRIGGER price_breaks_keep_quote_${event} ON price_breaks`);
+  await knex.raw('DROP FUNCTION clear_quote_breaks()');
   await knex.raw('DROP FUNCTION keep_quote_breaks_on_update()');
   await knex.raw('DROP FUNCTION keep_quote_breaks()');
   await knex.schema.alterTable('quotes', (t) => t.dropColumn('breaks_text'));

@@ -4,7 +4,7 @@ import type { Deps } from '../deps';
 import { scoped } from '../db/scope';
 import { today } from '../quotes/repository';
 import { costOf, costTotalsOf, type CostView } from './cost';
-import type { BomRow } from './repository';
+import { getBom, type BomRow } from './repository';
 import { releaseGuards } from './release-guards';
 import { RawJson } from '../http/raw-json';
 import { hasWaivers, stressOf, withWaivers, type StressCheckView } from '../stress/service';
@@ -33,14 +33,14 @@ export interface RollupRow {
   totals: unknown;
   /** The stored stress tally; null without a stress policy. */
   stressTally: StoredStress['tally'];
-  /** False on a roll-up stored before stress tallies were kept. */
+  /** False on a roll-up stored before the stress check was kept with it. */
   hasStress: boolean;
   computedAt?: Date;
 }
 
 /**
  * The stored cost roll of each BOM at its planned quantity and today's date, with its
- * stress tally. It is fresh while the workspace's costing epoch (bumped by triggers on
+ * stress check (no waivers) and tally. It is fresh while the workspace's costing epoch (bumped by triggers on
  * every input: lines, parts, quotes, price breaks, suppliers, rates, profiles, BOMs,
  * stress policies; a line's note is not an input) and the date and quantity still
  * match. Reads never wait for a recompute once a roll-up exists: a stale one is served
@@ -57,17 +57,20 @@ const isFresh = (r: { epoch: string; costingDate: string; qty: number } | undefi
 // Concurrent requests for the same roll in this process share one computation.
 const inFlight = new Map<string, Promise<{ cost: CostView; stress: StoredStress }>>();
 
-/** Computes and stores the roll-up of one BOM (the whole result, its totals and its stress tally). */
+/** Computes and stores the roll-up of one BOM (the whole result, its totals, its stress check and tally). */
 export async function refreshRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?: string): Promise<CostView> {
   return (await computeRollup(db, workspaceId, bom, epoch)).cost;
 }
 
-async function computeRollup(db: Knex, workspaceId: string, bom: BomRow, epoch?: string): Promise<{ cost: CostView; stress: StoredStress }> {
+async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch?: string): Promise<{ cost: CostView; stress: StoredStress }> {
   const e = epoch ?? (await epochOf(db, workspaceId));
-  const key = `${workspaceId}:${bom.id}:${e}:${bom.plannedQty}:${today()}`;
+  const key = `${workspaceId}:${given.id}:${e}:${given.plannedQty}:${today()}`;
   const running = inFlight.get(key);
   if (running) return running;
   const work = (async () => {
+    // The BOM as it stands now, read after the epoch: a row read before it could miss an
+    // edit (ambient, policy, profile) that the epoch already counts, and be stored as fresh.
+    const bom = await getBom(db, workspaceId, given.id);
     const [cost, check] = await Promise.all([costOf(db, workspaceId, bom), releaseGuards.stressCheck(db, workspaceId, bom)]);
     const stress: StoredStress = { tally: check?.summary ?? null, check };
     const row = {
@@ -94,7 +97,7 @@ export async function storedRollups(deps: Deps, workspaceId: string) {
     scoped(deps.db, 'cost_rollups', workspaceId)
       .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'computedAt',
         // The tally only: the stored check of a large BOM is far larger than the list needs.
-        deps.db.raw(`stress -> 'tally' AS stress_tally`), deps.db.raw('stress IS NOT NULL AS has_stress')) as Promise<RollupRow[]>,
+        deps.db.raw(`stress -> 'tally' AS stress_tally`), deps.db.raw(`jsonb_exists(stress, 'check') AS has_stress`)) as Promise<RollupRow[]>,
   ]);
   return { epoch, byBom: new Map(stored.map((r) => [r.bomId, r])) };
 }
@@ -107,7 +110,7 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   for (const bom of boms) {
     const r = byBom.get(bom.id);
     // A stored roll-up is served even when stale (and refreshed behind); one that never
-    // existed, or that was stored before tallies were kept, is computed now.
+    // existed, or that was stored before the stress check was kept with it, is computed now.
     if (r && r.hasStress) {
       const fresh = isFresh(r, epoch, bom);
       stale ||= !fresh;
@@ -184,11 +187,14 @@ export async function queueRefresh(deps: Deps, workspaceId: string): Promise<voi
 export async function refreshWorkspace(deps: Deps, workspaceId: string): Promise<number> {
   const epoch = await epochOf(deps.db, workspaceId);
   const boms = (await scoped(deps.db, 'boms', workspaceId)) as BomRow[];
-  const stored = (await scoped(deps.db, 'cost_rollups', workspaceId).select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty')) as RollupRow[];
+  const stored = (await scoped(deps.db, 'cost_rollups', workspaceId)
+    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`jsonb_exists(stress, 'check') AS has_stress`))) as RollupRow[];
   const byBom = new Map(stored.map((r) => [r.bomId, r]));
   let n = 0;
   for (const bom of boms) {
-    if (isFresh(byBom.get(bom.id), epoch, bom)) continue;
+    const r = byBom.get(bom.id);
+    // One stored before the stress check was kept with it counts as stale.
+    if (r?.hasStress && isFresh(r, epoch, bom)) continue;
     await refreshRollup(deps.db, workspaceId, bom, epoch);
     n++;
   }

@@ -131,10 +131,11 @@ export async function newRevisionIn(trx: Trx, auth: Auth, bomId: string) {
     const [row] = (await trx('boms')
       .insert({ ...copy, shelf: JSON.stringify(bom.shelf ?? {}), workspaceId: auth.workspaceId, revision: Number(last?.r ?? bom.revision) + 1, state: 'draft' })
       .returning('*')) as BomRow[];
-    const lines = await linesOf(trx, auth.workspaceId, bomId);
+    // Every column of every line (select *, not `linesOf`), so a column added later is copied too.
+    const lines = (await scoped(trx, 'bom_lines', auth.workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }])) as Record<string, unknown>[];
     for (let i = 0; i < lines.length; i += 1000) {
       await trx('bom_lines').insert(
-        lines.slice(i, i + 1000).map(({ id: _lid, bomId: _b, version: _lv, ...l }) => ({ ...l, workspaceId: auth.workspaceId, bomId: row.id })),
+        lines.slice(i, i + 1000).map(({ id: _lid, bomId: _b, version: _lv, createdAt: _c, updatedAt: _u, ...l }) => ({ ...l, workspaceId: auth.workspaceId, bomId: row.id })),
       );
     }
     await audit(trx, { workspaceId: auth.workspaceId, userId: auth.userId, action: 'revision', entity: 'bom', entityId: row.id, changes: { from: bomId, revision: row.revision } });

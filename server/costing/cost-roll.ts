@@ -590,11 +590,12 @@ const emptySums = (): Sums => ({
 // Zero terms are common (adders an Incoterm does not need); skipping them saves allocations.
 const add = (a: Dec, b: Dec): Dec => (b.isZero() ? a : a.plus(b));
 
-function addLine(s: Sums, w: Work): void {
-  const a = w.adders;
-  if (a) {
-    s.goods = add(s.goods, w.goods!);
-    s.excessValue = add(s.excessValue, w.excessValue!);
+/** A line's or a group's charges into its category's sums. */
+function addCharges(s: Sums, part: { goods: Dec; excessValue: Dec; adders: LineAdders } | undefined, assembly: Dec, landed: Dec, count: number): void {
+  if (part) {
+    const a = part.adders;
+    s.goods = add(s.goods, part.goods);
+    s.excessValue = add(s.excessValue, part.excessValue);
     s.origin = add(s.origin, a.origin);
     s.freight = add(s.freight, a.freight);
     s.insurance = add(s.insurance, a.insurance);
@@ -602,9 +603,22 @@ function addLine(s: Sums, w: Work): void {
     s.fees = add(s.fees, a.fees);
     s.destination = add(s.destination, a.destination);
   }
-  s.assembly = add(s.assembly, w.assembly);
-  s.landed = add(s.landed, w.landed);
-  s.count += 1;
+  s.assembly = add(s.assembly, assembly);
+  s.landed = add(s.landed, landed);
+  s.count += count;
+}
+
+function addLine(s: Sums, w: Work): void {
+  addCharges(s, w.adders && { goods: w.goods!, excessValue: w.excessValue!, adders: w.adders }, w.assembly, w.landed, 1);
+}
+
+function addSupplier(bySupplier: Map<string, SupplierSums>, supplierId: string, goods: Dec, excessValue: Dec, landed: Dec, count: number): void {
+  let s = bySupplier.get(supplierId);
+  if (!s) bySupplier.set(supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
+  s.goods = add(s.goods, goods);
+  s.excessValue = add(s.excessValue, excessValue);
+  s.landed = add(s.landed, landed);
+  s.count += count;
 }
 
 function addSums(into: Sums, s: Sums): void {
@@ -614,7 +628,7 @@ function addSums(into: Sums, s: Sums): void {
   into.count += s.count;
 }
 
-/** What sharing the per-shipment pools needs of a line (full roll) or a group of lines (totals only). */
+/** What sharing the per-shipment pools needs of a line (reference roll) or a group of lines (grouped roll). */
 interface PoolCarrier {
   incoterm: Incoterm;
   goods: Dec;
@@ -697,9 +711,11 @@ export interface RollOptions {
  * by goods value or by weight, fees by goods value), then insurance and duty are computed
  * with those shares in. Nothing is rounded.
  *
- * The roll runs grouped (`rollGrouped`), or line by line in decimal.js when its amounts are
- * too large for that (see `EXACT_RANGE`); with `exactRanking` line by line, every quote
- * priced exactly: the tests' reference.
+ * With its lines, the roll runs line by line with integer lines and sums in `Dec40`
+ * (`rollLines`: the reference's figures exactly); totals only, grouped (`rollGrouped`, or
+ * line by line when amounts are too large for that, see `EXACT_RANGE`); with
+ * `exactRanking` line by line in decimal.js, every quote priced exactly: the tests'
+ * reference.
  */
 export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: RollOptions = {}): CostRollResult {
   const N = dec(buildQty, 'qty');
@@ -707,23 +723,21 @@ export function rollPrepared(p: PreparedCostRoll, buildQty: number, options: Rol
   const amortiseOver = p.amortisationQty ?? N;
   const wantLines = options.lines !== false;
   const reference = options.exactRanking === true;
-  return (!reference && rollGrouped(p, buildQty, N, amortiseOver, wantLines)) || rollLineByLine(p, buildQty, N, amortiseOver, wantLines, reference);
+  if (reference) return rollLineByLine(p, buildQty, N, amortiseOver, wantLines, true);
+  if (wantLines) return rollLines(p, buildQty, N, amortiseOver);
+  return rollGrouped(p, buildQty, N, amortiseOver) ?? rollLineByLine(p, buildQty, N, amortiseOver, false, false);
 }
+
+const newWork = (pl: PreparedLine): Work => ({ pl, status: 'costed', warnings: [], category: pl.line.kind, assemblyPerUnit: ZERO, fxRows: [], assembly: ZERO, landed: ZERO });
+
+/** A costed part line as a carrier of the per-shipment pools. */
+const carrierOf = (w: Work): PoolCarrier => ({ incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 });
 
 /** The roll line by line in decimal.js: each line's adders, then sums in line-id order. */
 function rollLineByLine(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec, wantLines: boolean, reference: boolean): CostRollResult {
   const warnings: RollWarning[] = [...p.staticWarnings];
   const work: Work[] = p.lines.map((pl) => {
-    const w: Work = {
-      pl,
-      status: 'costed',
-      warnings: [],
-      category: pl.line.kind,
-      assemblyPerUnit: ZERO,
-      fxRows: [],
-      assembly: ZERO,
-      landed: ZERO,
-    };
+    const w = newWork(pl);
     if (pl.line.dnp) {
       w.status = 'dnp';
       return w;
@@ -732,8 +746,7 @@ function rollLineByLine(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseO
   });
 
   const partLines = work.filter((w) => w.status === 'costed' && w.chosen);
-  const carrier = (w: Work): PoolCarrier => ({ incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 });
-  const { freight: freightRule, fees: feesRule, fxSeen } = shareBuildPools(p, partLines, carrier, warnings);
+  const { freight: freightRule, fees: feesRule, fxSeen } = shareBuildPools(p, partLines, carrierOf, warnings);
 
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
@@ -748,14 +761,8 @@ function rollLineByLine(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseO
     noteFx(w.fxRows);
     if (w.chosen) {
       lineExcess(w);
-      lineCharges(p, w, N, carrier(w), freightRule, feesRule);
-      const supplierId = w.chosen.pq.quote.supplierId;
-      let s = bySupplier.get(supplierId);
-      if (!s) bySupplier.set(supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
-      s.goods = add(s.goods, w.goods!);
-      s.excessValue = add(s.excessValue, w.excessValue!);
-      s.landed = add(s.landed, w.landed);
-      s.count += 1;
+      lineCharges(p, w, N, carrierOf(w), freightRule, feesRule);
+      addSupplier(bySupplier, w.chosen.pq.quote.supplierId, w.goods!, w.excessValue!, w.landed, 1);
     } else {
       costLineCharges(w, N, amortiseOver);
       costLinesPerUnit = add(costLinesPerUnit, w.costPerUnit ?? ZERO);
@@ -907,7 +914,7 @@ function rollResult(p: PreparedCostRoll, N: Dec, amortiseOver: Dec, r: RollParts
 }
 
 // ---------------------------------------------------------------------------------------
-// The roll in groups: totals from group sums, each line's figures in BigInts (`Dec40`)
+// Integer lines: totals only in groups (the volume curve), the full roll in Dec40
 
 /**
  * Part lines whose chosen quotes share category, duty rate, supplier, Incoterm and
@@ -937,7 +944,7 @@ interface Group {
   goods: Dec;
 }
 
-/** A part line settled in integers, kept (when lines are wanted) to print its figures. */
+/** A part line settled in integers (see `integerLine`). */
 interface IntegerLine {
   pl: PreparedLine;
   rank: LineRank;
@@ -963,24 +970,49 @@ function micros(small: number, big: bigint): Dec {
 }
 
 /**
+ * A part line settled in integers — no pin, a choice the floats settle, a price in whole
+ * millionths, goods and excess below 2^53 millionths, freight not shared by weight (the
+ * common case) — or null when it needs decimal.js.
+ */
+function integerLine(p: PreparedCostRoll, pl: PreparedLine, buildQty: number, N: Dec): IntegerLine | null {
+  const rank = pl.rank;
+  if (!rank || pl.line.kind !== 'part' || pl.line.pinnedQuoteId || p.byWeight || rank.candidates.length === 0) return null;
+  const required = lineRequired(pl, rank, buildQty, N);
+  const k = settle(rank.candidates, required);
+  if (k < 0) return null;
+  const cand = rank.candidates[k];
+  const o = scratchOrders[k];
+  const price = microPrices(cand.slot.terms)[o.tier];
+  const goods = o.qty * price;
+  const excess = (o.qty - required) * price;
+  if (!Number.isSafeInteger(goods) || !Number.isSafeInteger(excess)) return null;
+  let assemblyPerUnit = ZERO;
+  let missingPins = false;
+  if (p.assemblyRates.ok) {
+    const a = (pl.assembly ??= lineAssembly(p.assemblyRates, pl.qtyPerUnit, rank.part));
+    assemblyPerUnit = a.perUnit;
+    missingPins = a.missingPins;
+  }
+  return { pl, rank, cand, required, orderQty: o.qty, priceMicro: price, goodsMicro: goods, excessMicro: excess, assemblyPerUnit, missingPins };
+}
+
+/**
  * Grouping changes the order in which amounts are added, and decimal.js rounds each sum to
  * 40 significant digits. Below 10^20 that rounding sits at 10^-20 or finer, far below the
- * 10 decimals printed, so both orders print the same; a roll with a group or cost line at
- * or above it (only absurd prices or quantities get there) is rolled line by line.
+ * 10 decimals printed, so both orders print the same, or one unit apart in the last place
+ * when a figure lies at a rounding half-way point (a repeating cross rate times round
+ * quantities can get there); at or above it (only absurd prices or quantities get there)
+ * the rounding reaches the printed places, so such a totals-only roll is rolled line by line.
  */
 const EXACT_RANGE = new Dec('1e20');
 const withinExactRange = (amount: Dec) => amount.abs().lt(EXACT_RANGE);
 
 /**
- * The roll by groups (`Group`). Part lines with no pin, a choice the floats settle, a price
- * in whole millionths and freight not shared by weight — the common case — are summed as
- * integers; every other line is costed in decimal.js as the reference roll does and joins
- * its group. The totals come from the group sums; each line's own figures, when wanted,
- * are computed in decimal.js's arithmetic (`Dec40` on BigInts for the integer lines,
- * decimal.js objects for the rest).
- * Null when an amount is beyond `EXACT_RANGE`.
+ * The totals-only roll by groups (`Group`): integer lines are summed as integers; every
+ * other line is costed in decimal.js as the reference roll does and joins its group. Null
+ * when an amount is beyond `EXACT_RANGE` (the caller then rolls line by line).
  */
-function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec, wantLines: boolean): CostRollResult | null {
+function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec): CostRollResult | null {
   const warnings: RollWarning[] = [...p.staticWarnings];
   const groups = new Map<string, Group>();
   const groupFor = (key: string, category: string, duty: DutyMatch, pq: PreparedQuote, fx: FxFound): Group => {
@@ -995,15 +1027,11 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
     }
     return g;
   };
-  const integerLines: IntegerLine[] = [];
-  const decimalLines: Work[] = [];
   const costWork: Work[] = [];
   const leftOut: Work[] = [];
   const dnp: Work[] = [];
   // Lines in the integer path can only carry missing_pins; the others carry their own list.
   let lineWarningCount = 0;
-  const newWork = (pl: PreparedLine): Work => ({ pl, status: 'costed', warnings: [], category: pl.line.kind, assemblyPerUnit: ZERO, fxRows: [], assembly: ZERO, landed: ZERO });
-
   for (const pl of p.lines) {
     if (pl.line.dnp) {
       const w = newWork(pl);
@@ -1018,35 +1046,19 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
       (w.status === 'left_out' ? leftOut : costWork).push(w);
       continue;
     }
-    if (rank && !pl.line.pinnedQuoteId && !p.byWeight && rank.candidates.length > 0) {
-      const required = lineRequired(pl, rank, buildQty, N);
-      const k = settle(rank.candidates, required);
-      const c = k >= 0 ? rank.candidates[k] : undefined;
-      const o = scratchOrders[k];
-      const price = c ? microPrices(c.slot.terms)[o.tier] : Number.NaN;
-      const goods = o ? o.qty * price : Number.NaN;
-      const excess = o ? (o.qty - required) * price : Number.NaN;
-      if (c && Number.isSafeInteger(goods) && Number.isSafeInteger(excess)) {
-        const g = groupFor(c.groupKey, rank.part.category, rank.duty, c.slot, c.fx);
-        g.count += 1;
-        const gm = g.goodsMicro + goods;
-        if (Number.isSafeInteger(gm)) g.goodsMicro = gm;
-        else g.goodsBig += BigInt(goods);
-        const em = g.excessMicro + excess;
-        if (Number.isSafeInteger(em)) g.excessMicro = em;
-        else g.excessBig += BigInt(excess);
-        let assemblyPerUnit = ZERO;
-        let missingPins = false;
-        if (p.assemblyRates.ok) {
-          const a = (pl.assembly ??= lineAssembly(p.assemblyRates, pl.qtyPerUnit, rank.part));
-          assemblyPerUnit = a.perUnit;
-          missingPins = a.missingPins;
-          g.assemblyPerUnit = add(g.assemblyPerUnit, a.perUnit);
-          if (a.missingPins) lineWarningCount += 1;
-        }
-        if (wantLines) integerLines.push({ pl, rank, cand: c, required, orderQty: o.qty, priceMicro: price, goodsMicro: goods, excessMicro: excess, assemblyPerUnit, missingPins });
-        continue;
-      }
+    const il = integerLine(p, pl, buildQty, N);
+    if (il) {
+      const g = groupFor(il.cand.groupKey, il.rank.part.category, il.rank.duty, il.cand.slot, il.cand.fx);
+      g.count += 1;
+      const gm = g.goodsMicro + il.goodsMicro;
+      if (Number.isSafeInteger(gm)) g.goodsMicro = gm;
+      else g.goodsBig += BigInt(il.goodsMicro);
+      const em = g.excessMicro + il.excessMicro;
+      if (Number.isSafeInteger(em)) g.excessMicro = em;
+      else g.excessBig += BigInt(il.excessMicro);
+      g.assemblyPerUnit = add(g.assemblyPerUnit, il.assemblyPerUnit);
+      if (il.missingPins) lineWarningCount += 1;
+      continue;
     }
     // Everything else line by line in decimal.js, as the reference roll does, then into its group.
     const w = costPartLine(p, newWork(pl), buildQty, N, false);
@@ -1063,7 +1075,6 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
     g.excessDec = add(g.excessDec, w.excessValue!);
     if (w.weight) g.weight = add(g.weight, w.weight);
     g.assemblyPerUnit = add(g.assemblyPerUnit, w.assemblyPerUnit);
-    decimalLines.push(w);
   }
 
   const all = [...groups.values()];
@@ -1102,24 +1113,8 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
     if (!withinExactRange(landed)) return null;
     const inQuote = micros(g.excessMicro, g.excessBig);
     const excessValue = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.excessDec);
-    const c = categorySums(g.category);
-    c.goods = add(c.goods, g.goods);
-    c.excessValue = add(c.excessValue, excessValue);
-    c.origin = add(c.origin, a.origin);
-    c.freight = add(c.freight, a.freight);
-    c.insurance = add(c.insurance, a.insurance);
-    c.duty = add(c.duty, a.duty);
-    c.fees = add(c.fees, a.fees);
-    c.destination = add(c.destination, a.destination);
-    c.assembly = add(c.assembly, assembly);
-    c.landed = add(c.landed, landed);
-    c.count += g.count;
-    let s = bySupplier.get(g.supplierId);
-    if (!s) bySupplier.set(g.supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
-    s.goods = add(s.goods, g.goods);
-    s.excessValue = add(s.excessValue, excessValue);
-    s.landed = add(s.landed, landed);
-    s.count += g.count;
+    addCharges(categorySums(g.category), { goods: g.goods, excessValue, adders: a }, assembly, landed, g.count);
+    addSupplier(bySupplier, g.supplierId, g.goods, excessValue, landed, g.count);
   }
   for (const w of costWork) {
     noteFx(w.fxRows);
@@ -1130,29 +1125,32 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
     addLine(categorySums(w.category), w);
   }
 
-  let lines: CostRollLine[] = [];
-  if (wantLines) {
-    const out = new Array<CostRollLine>(p.lines.length);
-    const exact = exactFigures(p, N, freightRule, feesRule);
-    for (const l of integerLines) out[l.pl.index] = exact.output(l);
-    for (const w of decimalLines) {
-      lineCharges(p, w, N, { incoterm: w.chosen!.pq.incoterm, goods: w.goods!, weight: w.weight ?? ZERO, count: 1 }, freightRule, feesRule);
-      out[w.pl.index] = workOutput(w, N);
-    }
-    for (const w of [...costWork, ...leftOut, ...dnp]) out[w.pl.index] = workOutput(w, N);
-    lines = out;
-  }
-  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines, leftOut, dnp, lineWarningCount });
+  return rollResult(p, N, amortiseOver, { warnings, byCategory, bySupplier, costLinesPerUnit, oneTimeTotal, fxSeen, lines: [], leftOut, dnp, lineWarningCount });
 }
 
+/** Category sums kept in `Dec40`, added in line order as the reference roll adds them. */
+type Sums40 = { [K in Exclude<keyof Sums, 'count'>]: Dec40 } & { count: number };
+
+const emptySums40 = (): Sums40 => ({
+  goods: Dec40.ZERO, excessValue: Dec40.ZERO, origin: Dec40.ZERO, freight: Dec40.ZERO, insurance: Dec40.ZERO,
+  duty: Dec40.ZERO, fees: Dec40.ZERO, destination: Dec40.ZERO, assembly: Dec40.ZERO, landed: Dec40.ZERO, count: 0,
+});
+
+/** An exact `Dec40` value as an engine decimal (decimal.js takes every digit it is given). */
+const decOf = (x: Dec40) => new Dec(x.toFixed(x.places));
+
 /**
- * Prints the integer lines' figures: the same rules (`lineAdders`) on `Dec40` numbers, the rates, percentages and pool rules converted once per roll.
+ * The cost roll with its lines: the reference roll's operations in the reference roll's
+ * order, line by line, but each integer line (`integerLine`) and every sum in `Dec40` —
+ * decimal.js's arithmetic on BigInts — so the result is the reference's digit for digit at
+ * a fraction of the cost. Lines that need decimal.js are costed as the reference costs them.
  */
-function exactFigures(p: PreparedCostRoll, N: Dec, freightRule: PoolRule | null, feesRule: PoolRule | null) {
+function rollLines(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: Dec): CostRollResult {
+  const warnings: RollWarning[] = [...p.staticWarnings];
   const n = BigInt(N.toFixed());
   const Nx = Dec40.of(N);
   const { pct } = p.profile;
-  const pctX: PercentAdders<Dec40> = {
+  const pctX: Required<PercentAdders<Dec40>> = {
     origin: Dec40.of(pct.origin), freight: Dec40.of(pct.freight), insurance: Dec40.of(pct.insurance), destination: Dec40.of(pct.destination),
     insured: Dec40.of(pct.insured ?? pct.insurance.times(INSURED_SHARE)),
   };
@@ -1162,47 +1160,149 @@ function exactFigures(p: PreparedCostRoll, N: Dec, freightRule: PoolRule | null,
     if (!x) cache.set(d, (x = Dec40.of(d)));
     return x;
   };
-  // A pool's share for one line (count 1); never by weight here (such rolls have no integer lines).
-  const share = (rule: PoolRule | null, adder: 'freight' | 'fees', incoterm: Incoterm, goods: Dec40): Dec40 | undefined => {
-    if (!rule || !needsAdder(incoterm, adder)) return undefined;
+  const print: Printer<Dec40> = { money: (v) => v.toFixed(MONEY_DP), perUnit: (v) => v.toFixed(PER_UNIT_DP), perBuildUnit: (v) => v.divToFixed(n, PER_UNIT_DP) };
+
+  // First pass, in line-id order: integer lines with their goods in Dec40, the rest as the reference costs them.
+  type Entry = { int: IntegerLine; goods: Dec40; goodsDec: Dec } | { w: Work };
+  const entries: Entry[] = p.lines.map((pl) => {
+    if (pl.line.dnp) {
+      const w = newWork(pl);
+      w.status = 'dnp';
+      return { w };
+    }
+    if (pl.line.kind !== 'part') return { w: costCostLine(p, newWork(pl)) };
+    const il = integerLine(p, pl, buildQty, N);
+    if (!il) return { w: costPartLine(p, newWork(pl), buildQty, N, false) };
+    const inQuote = Dec40.micros(il.goodsMicro);
+    const goods = il.cand.fx.route === 'same' ? inQuote : inQuote.times(ex(il.cand.fx.rate));
+    return { int: il, goods, goodsDec: decOf(goods) };
+  });
+
+  const carriers: { entry: Entry; view: PoolCarrier }[] = [];
+  for (const e of entries) {
+    if ('int' in e) carriers.push({ entry: e, view: { incoterm: e.int.cand.slot.incoterm, goods: e.goodsDec, weight: ZERO, count: 1 } });
+    else if (e.w.status === 'costed' && e.w.chosen) carriers.push({ entry: e, view: carrierOf(e.w) });
+  }
+  const { freight: freightRule, fees: feesRule, fxSeen } = shareBuildPools(p, carriers, (c) => c.view, warnings);
+  const share = (rule: PoolRule | null, adder: 'freight' | 'fees', view: PoolCarrier, goods: Dec40): Dec40 | undefined => {
+    if (!rule || !needsAdder(view.incoterm, adder)) return undefined;
+    // The reference multiplies its goods (the same value) by the same rule: one decimal.js product.
     if (rule.key === 'line') return ex(rule.each);
     if (rule.key === 'weight') throw new Error('freight by weight is costed line by line in decimal.js');
     return goods.times(ex(rule.perKey));
   };
-  const print: Printer<Dec40> = {
-    money: (v) => v.toFixed(MONEY_DP),
-    perUnit: (v) => v.toFixed(PER_UNIT_DP),
-    perBuildUnit: (v) => v.divToFixed(n, PER_UNIT_DP),
+
+  let costLinesPerUnit = ZERO;
+  let oneTimeTotal = ZERO;
+  const byCategory = new Map<string, Sums40>();
+  const bySupplier = new Map<string, { goods: Dec40; excessValue: Dec40; landed: Dec40; count: number }>();
+  const sumsOf = (category: string) => {
+    let c = byCategory.get(category);
+    if (!c) byCategory.set(category, (c = emptySums40()));
+    return c;
   };
-  return {
-    output(l: IntegerLine): CostRollLine {
+  const addTo = (c: Sums40, part: { goods: Dec40; excessValue: Dec40; adders: LineAdders<Dec40> } | undefined, assembly: Dec40, landed: Dec40) => {
+    if (part) {
+      const a = part.adders;
+      c.goods = c.goods.plus(part.goods);
+      c.excessValue = c.excessValue.plus(part.excessValue);
+      c.origin = c.origin.plus(a.origin);
+      c.freight = c.freight.plus(a.freight);
+      c.insurance = c.insurance.plus(a.insurance);
+      c.duty = c.duty.plus(a.duty);
+      c.fees = c.fees.plus(a.fees);
+      c.destination = c.destination.plus(a.destination);
+    }
+    c.assembly = c.assembly.plus(assembly);
+    c.landed = c.landed.plus(landed);
+    c.count += 1;
+  };
+  const addSupplier40 = (supplierId: string, goods: Dec40, excessValue: Dec40, landed: Dec40) => {
+    let s = bySupplier.get(supplierId);
+    if (!s) bySupplier.set(supplierId, (s = { goods: Dec40.ZERO, excessValue: Dec40.ZERO, landed: Dec40.ZERO, count: 0 }));
+    s.goods = s.goods.plus(goods);
+    s.excessValue = s.excessValue.plus(excessValue);
+    s.landed = s.landed.plus(landed);
+    s.count += 1;
+  };
+
+  const lines = new Array<CostRollLine>(p.lines.length);
+  const leftOut: Work[] = [];
+  const dnp: Work[] = [];
+  let lineWarningCount = 0;
+  for (const e of entries) {
+    if ('int' in e) {
+      const { int: l, goods } = e;
       const { cand, rank } = l;
       const rate = ex(cand.fx.rate);
       const same = cand.fx.route === 'same';
-      const price = Dec40.micros(l.priceMicro);
-      const goodsInQuote = Dec40.micros(l.goodsMicro);
-      const excessInQuote = Dec40.micros(l.excessMicro);
-      const goods = same ? goodsInQuote : goodsInQuote.times(rate);
       const incoterm = cand.slot.incoterm;
-      const freightShare = share(freightRule, 'freight', incoterm, goods);
+      const view: PoolCarrier = { incoterm, goods: e.goodsDec, weight: ZERO, count: 1 };
+      const freightShare = share(freightRule, 'freight', view, goods);
       const adders = lineAdders<Dec40>(
-        { goods, incoterm, pct: pctX, dutyBasis: p.profile.dutyBasis, dutyRate: ex(rank.duty.rate), freightShare, feesShare: share(feesRule, 'fees', incoterm, goods) },
+        { goods, incoterm, pct: pctX, dutyBasis: p.profile.dutyBasis, dutyRate: ex(rank.duty.rate), freightShare, feesShare: share(feesRule, 'fees', view, goods) },
         Dec40.ZERO,
       );
       const assembly = l.assemblyPerUnit.isZero() ? Dec40.ZERO : ex(l.assemblyPerUnit).times(Nx);
+      const landed = adders.landed.plus(assembly);
+      const excessInQuote = Dec40.micros(l.excessMicro);
+      const excessValue = same ? excessInQuote : excessInQuote.times(rate);
+      for (const r of cand.fx.rows) fxSeen.add(r);
+      addSupplier40(cand.slot.quote.supplierId, goods, excessValue, landed);
+      addTo(sumsOf(rank.part.category), { goods, excessValue, adders }, assembly, landed);
+      const price = Dec40.micros(l.priceMicro);
       const q = cand.slot.quote;
-      return lineOutput<Dec40>(
+      const warningsOf = l.missingPins ? [{ code: 'missing_pins' as const, detail: rank.part.id }] : [];
+      lineWarningCount += warningsOf.length;
+      lines[l.pl.index] = lineOutput<Dec40>(
         {
           pl: l.pl, status: 'costed', category: rank.part.category, duty: rank.duty, required: l.required, excessQty: l.orderQty - l.required,
-          fxRows: cand.fx.rows, warnings: l.missingPins ? [{ code: 'missing_pins', detail: rank.part.id }] : [],
+          fxRows: cand.fx.rows, warnings: warningsOf,
           quote: { id: q.id, supplierId: q.supplierId, currency: q.currency, incoterm, orderQty: l.orderQty, unitPrice: price, unitPriceConverted: price.times(rate) },
-          amounts: { goods, excessValue: same ? excessInQuote : excessInQuote.times(rate), adders, freightShare },
-          assembly, landed: adders.landed.plus(assembly),
+          amounts: { goods, excessValue, adders, freightShare },
+          assembly, landed,
         },
         print,
       );
-    },
-  };
+      continue;
+    }
+    const { w } = e;
+    lineWarningCount += w.warnings.length;
+    if (w.status === 'costed') {
+      for (const r of w.fxRows) fxSeen.add(r);
+      if (w.chosen) {
+        lineExcess(w);
+        lineCharges(p, w, N, carrierOf(w), freightRule, feesRule);
+        const goods = Dec40.of(w.goods!);
+        const excessValue = Dec40.of(w.excessValue!);
+        const landed = Dec40.of(w.landed);
+        addSupplier40(w.chosen.pq.quote.supplierId, goods, excessValue, landed);
+        const a = w.adders!;
+        const adders: LineAdders<Dec40> = {
+          origin: Dec40.of(a.origin), freight: Dec40.of(a.freight), insurance: Dec40.of(a.insurance), customsValue: a.customsValue && Dec40.of(a.customsValue),
+          duty: Dec40.of(a.duty), fees: Dec40.of(a.fees), destination: Dec40.of(a.destination), landed: Dec40.of(a.landed),
+        };
+        addTo(sumsOf(w.category), { goods, excessValue, adders }, Dec40.of(w.assembly), landed);
+      } else {
+        costLineCharges(w, N, amortiseOver);
+        costLinesPerUnit = add(costLinesPerUnit, w.costPerUnit ?? ZERO);
+        oneTimeTotal = add(oneTimeTotal, w.oneTimeCost ?? ZERO);
+        addTo(sumsOf(w.category), undefined, Dec40.of(w.assembly), Dec40.of(w.landed));
+      }
+    } else (w.status === 'dnp' ? dnp : leftOut).push(w);
+    lines[w.pl.index] = workOutput(w, N);
+  }
+
+  const decSums = new Map<string, Sums>();
+  for (const [k, c] of byCategory) {
+    decSums.set(k, {
+      goods: decOf(c.goods), excessValue: decOf(c.excessValue), origin: decOf(c.origin), freight: decOf(c.freight), insurance: decOf(c.insurance),
+      duty: decOf(c.duty), fees: decOf(c.fees), destination: decOf(c.destination), assembly: decOf(c.assembly), landed: decOf(c.landed), count: c.count,
+    });
+  }
+  const decSuppliers = new Map<string, SupplierSums>();
+  for (const [k, s2] of bySupplier) decSuppliers.set(k, { goods: decOf(s2.goods), excessValue: decOf(s2.excessValue), landed: decOf(s2.landed), count: s2.count });
+  return rollResult(p, N, amortiseOver, { warnings, byCategory: decSums, bySupplier: decSuppliers, costLinesPerUnit, oneTimeTotal, fxSeen, lines, leftOut, dnp, lineWarningCount });
 }
 
 /** The FX rows behind a roll, each once (per direction), by date then pair. */

@@ -17,6 +17,14 @@ function pow10(n: number): bigint {
 }
 const LIMIT = pow10(PRECISION);
 
+/** Decimal digits of x ≥ 10^40, by comparing with powers of ten (cheaper than printing x). */
+function digitsAbove(x: bigint): number {
+  let d = PRECISION + 1;
+  while (x >= pow10(d + 8)) d += 8;
+  while (x >= pow10(d)) d++;
+  return d;
+}
+
 /** |x| / d rounded half-up (away from zero) to a whole number; d ≥ 1. */
 function divHalfUp(abs: bigint, d: bigint): bigint {
   return (2n * abs + d) / (2n * d);
@@ -35,7 +43,7 @@ export class Dec40 {
     const negative = units < 0n;
     const abs = negative ? -units : units;
     if (abs < LIMIT) return new Dec40(units, places);
-    const drop = abs.toString().length - PRECISION;
+    const drop = digitsAbove(abs) - PRECISION;
     let q = divHalfUp(abs, pow10(drop));
     let p = places - drop;
     if (p < 0) {

@@ -8,7 +8,7 @@ export const INSURED_SHARE = new Dec('1.10');
 
 /**
  * What the adder rules need of a number: decimal.js values, or exact scaled integers
- * (`Exact`, for the lines of a large roll). One set of rules serves both.
+ * (`Dec40`, for the lines of a large roll). One set of rules serves both.
  */
 export interface Amount<T> {
   plus(b: T): T;
@@ -53,7 +53,10 @@ const add = <T extends Amount<T>>(a: T, b: T | undefined): T => (b === undefined
  * fees = share; destination = destinationPct × G. An adder the Incoterm does not need is 0,
  * and so is a share handed in for it.
  */
-export function lineAdders<T extends Amount<T> = Dec>(a: AdderInput<T>, zero: T = ZERO as unknown as T): LineAdders<T> {
+export function lineAdders(a: AdderInput): LineAdders;
+/** Other number types name their zero and bring insurance × 1.10 precomputed. */
+export function lineAdders<T extends Amount<T>>(a: AdderInput<T> & { pct: { insured: T } }, zero: T): LineAdders<T>;
+export function lineAdders<T extends Amount<T>>(a: AdderInput<T>, zero: T = ZERO as unknown as T): LineAdders<T> {
   const times = (rate: T, value: T): T => (rate.isZero() ? zero : rate.times(value));
   const g = a.goods;
   const needs = INCOTERM_ADDERS[a.incoterm];

@@ -25,9 +25,16 @@ function digitsAbove(x: bigint): number {
   return d;
 }
 
-/** |x| / d rounded half-up (away from zero) to a whole number; d ≥ 1. */
-function divHalfUp(abs: bigint, d: bigint): bigint {
-  return (2n * abs + d) / (2n * d);
+const HALVES: bigint[] = [0n];
+/** Half of 10^k (k ≥ 1). */
+function half(k: number): bigint {
+  while (HALVES.length <= k) HALVES.push(5n * pow10(HALVES.length - 1));
+  return HALVES[k];
+}
+
+/** |x| / 10^k rounded half-up (away from zero) to a whole number; k ≥ 1. */
+function shiftHalfUp(abs: bigint, k: number): bigint {
+  return (abs + half(k)) / pow10(k);
 }
 
 export class Dec40 {
@@ -44,7 +51,7 @@ export class Dec40 {
     const abs = negative ? -units : units;
     if (abs < LIMIT) return new Dec40(units, places);
     const drop = digitsAbove(abs) - PRECISION;
-    let q = divHalfUp(abs, pow10(drop));
+    let q = shiftHalfUp(abs, drop);
     let p = places - drop;
     if (p < 0) {
       q *= pow10(-p);
@@ -87,7 +94,7 @@ export class Dec40 {
   toFixed(dp: number): string {
     const negative = this.units < 0n;
     const abs = negative ? -this.units : this.units;
-    const q = this.places <= dp ? abs * pow10(dp - this.places) : divHalfUp(abs, pow10(this.places - dp));
+    const q = this.places <= dp ? abs * pow10(dp - this.places) : shiftHalfUp(abs, this.places - dp);
     return fixedText(negative, q, dp);
   }
 
@@ -114,7 +121,7 @@ export class Dec40 {
       if (2n * (low * n + rest) >= d * n) q += 1n;
       places -= drop;
     }
-    const out = places <= dp ? q * pow10(dp - places) : divHalfUp(q, pow10(places - dp));
+    const out = places <= dp ? q * pow10(dp - places) : shiftHalfUp(q, places - dp);
     return fixedText(negative, out, dp);
   }
 }

@@ -7,7 +7,7 @@ import { updateOrConflict } from '../db/versioned';
 import { audit } from '../audit/repository';
 import { can } from '../../src/shared/permissions';
 import type { BomState, LineCreateBody, LinePatchBody } from '../../src/shared/schemas/boms';
-import { editableBom, getBom, lineColumns, lineView, linesOf, bomView, type BomRow, type LineRow } from './repository';
+import { editableBom, getBom, lineColumns, lineView, bomView, type BomRow, type LineRow } from './repository';
 
 /** Lines may name only parts and quotes of this workspace; a pinned quote must be for the line's part. */
 async function checkLineRefs(trx: Trx, workspaceId: string, rows: { partId?: string | null; pinnedQuoteId?: string | null }[]) {

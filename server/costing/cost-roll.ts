@@ -1039,7 +1039,6 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
       dnp.push(w);
       continue;
     }
-    const rank = pl.rank;
     if (pl.line.kind !== 'part') {
       const w = costCostLine(p, newWork(pl));
       lineWarningCount += w.warnings.length;

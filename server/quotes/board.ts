@@ -5,7 +5,7 @@ import { scoped } from '../db/scope';
 import { quoteBoard, CostingInputError, type Quote } from '../costing';
 import { loadQuotes, today } from './repository';
 import { ratesAsOf, pivotOf } from '../fx/repository';
-import { getProfile, firstProfile, type ProfileRow } from '../profiles/repository';
+import { getProfile, firstProfile } from '../profiles/repository';
 
 export interface BoardQuery {
   qty: number;

@@ -3,9 +3,9 @@ import type { Deps } from '../deps';
 import type { Auth } from '../http/route';
 import { scoped } from '../db/scope';
 import { errors } from '../http/errors';
-import { checkBom, type StressCheckResult, type StressLineInput } from '../derating';
+import { checkBom, type StressLineInput } from '../derating';
 import { linesOf, type BomRow, type LineRow } from '../boms/repository';
-import { policyFor, type PolicyRow } from './policies';
+import { policyFor } from './policies';
 
 export interface WaiverRow {
   id: string;

@@ -4,7 +4,7 @@ import { CostingInputError } from './errors';
 import type { DutyMatch } from './duty';
 import { createFxIndex, type FxFound, type FxIndex, type FxLookup } from './fx';
 import { needsAdder } from './incoterms';
-import { INSURED_SHARE, lineAdders, type LineAdders } from './landed';
+import { INSURED_SHARE, lineAdders, type Amount, type LineAdders } from './landed';
 import {
   floatsApart,
   microPrices,
@@ -559,17 +559,17 @@ function lineAssembly(r: { smt: Dec; tht: Dec; hand: Dec }, q: Dec, part: Part):
   return { perUnit: ZERO, missingPins: false };
 }
 
-interface Sums {
-  goods: Dec;
-  excessValue: Dec;
-  origin: Dec;
-  freight: Dec;
-  insurance: Dec;
-  duty: Dec;
-  fees: Dec;
-  destination: Dec;
-  assembly: Dec;
-  landed: Dec;
+interface Sums<T = Dec> {
+  goods: T;
+  excessValue: T;
+  origin: T;
+  freight: T;
+  insurance: T;
+  duty: T;
+  fees: T;
+  destination: T;
+  assembly: T;
+  landed: T;
   count: number;
 }
 
@@ -588,10 +588,10 @@ const emptySums = (): Sums => ({
 });
 
 // Zero terms are common (adders an Incoterm does not need); skipping them saves allocations.
-const add = (a: Dec, b: Dec): Dec => (b.isZero() ? a : a.plus(b));
+const add = <T extends Amount<T>>(a: T, b: T): T => (b.isZero() ? a : a.plus(b));
 
-/** A line's or a group's charges into its category's sums. */
-function addCharges(s: Sums, part: { goods: Dec; excessValue: Dec; adders: LineAdders } | undefined, assembly: Dec, landed: Dec, count: number): void {
+/** A line's or a group's charges into its category's sums (decimal.js or `Dec40`). */
+function addCharges<T extends Amount<T>>(s: Sums<T>, part: { goods: T; excessValue: T; adders: LineAdders<T> } | undefined, assembly: T, landed: T, count: number): void {
   if (part) {
     const a = part.adders;
     s.goods = add(s.goods, part.goods);
@@ -612,9 +612,9 @@ function addLine(s: Sums, w: Work): void {
   addCharges(s, w.adders && { goods: w.goods!, excessValue: w.excessValue!, adders: w.adders }, w.assembly, w.landed, 1);
 }
 
-function addSupplier(bySupplier: Map<string, SupplierSums>, supplierId: string, goods: Dec, excessValue: Dec, landed: Dec, count: number): void {
+function addSupplier<T extends Amount<T>>(bySupplier: Map<string, SupplierSums<T>>, zero: T, supplierId: string, goods: T, excessValue: T, landed: T, count: number): void {
   let s = bySupplier.get(supplierId);
-  if (!s) bySupplier.set(supplierId, (s = { goods: ZERO, excessValue: ZERO, landed: ZERO, count: 0 }));
+  if (!s) bySupplier.set(supplierId, (s = { goods: zero, excessValue: zero, landed: zero, count: 0 }));
   s.goods = add(s.goods, goods);
   s.excessValue = add(s.excessValue, excessValue);
   s.landed = add(s.landed, landed);
@@ -762,7 +762,7 @@ function rollLineByLine(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseO
     if (w.chosen) {
       lineExcess(w);
       lineCharges(p, w, N, carrierOf(w), freightRule, feesRule);
-      addSupplier(bySupplier, w.chosen.pq.quote.supplierId, w.goods!, w.excessValue!, w.landed, 1);
+      addSupplier(bySupplier, ZERO, w.chosen.pq.quote.supplierId, w.goods!, w.excessValue!, w.landed, 1);
     } else {
       costLineCharges(w, N, amortiseOver);
       costLinesPerUnit = add(costLinesPerUnit, w.costPerUnit ?? ZERO);
@@ -824,10 +824,10 @@ interface RollParts {
   lineWarningCount: number;
 }
 
-interface SupplierSums {
-  goods: Dec;
-  excessValue: Dec;
-  landed: Dec;
+interface SupplierSums<T = Dec> {
+  goods: T;
+  excessValue: T;
+  landed: T;
   count: number;
 }
 
@@ -1113,7 +1113,7 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
     const inQuote = micros(g.excessMicro, g.excessBig);
     const excessValue = add(g.fx.route === 'same' ? inQuote : inQuote.times(g.fx.rate), g.excessDec);
     addCharges(categorySums(g.category), { goods: g.goods, excessValue, adders: a }, assembly, landed, g.count);
-    addSupplier(bySupplier, g.supplierId, g.goods, excessValue, landed, g.count);
+    addSupplier(bySupplier, ZERO, g.supplierId, g.goods, excessValue, landed, g.count);
   }
   for (const w of costWork) {
     noteFx(w.fxRows);
@@ -1128,7 +1128,7 @@ function rollGrouped(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver
 }
 
 /** Category sums kept in `Dec40`, added in line order as the reference roll adds them. */
-type Sums40 = { [K in Exclude<keyof Sums, 'count'>]: Dec40 } & { count: number };
+type Sums40 = Sums<Dec40>;
 
 const emptySums40 = (): Sums40 => ({
   goods: Dec40.ZERO, excessValue: Dec40.ZERO, origin: Dec40.ZERO, freight: Dec40.ZERO, insurance: Dec40.ZERO,
@@ -1194,37 +1194,12 @@ function rollLines(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: 
   let costLinesPerUnit = ZERO;
   let oneTimeTotal = ZERO;
   const byCategory = new Map<string, Sums40>();
-  const bySupplier = new Map<string, { goods: Dec40; excessValue: Dec40; landed: Dec40; count: number }>();
+  const bySupplier = new Map<string, SupplierSums<Dec40>>();
   const sumsOf = (category: string) => {
     let c = byCategory.get(category);
     if (!c) byCategory.set(category, (c = emptySums40()));
     return c;
   };
-  const addTo = (c: Sums40, part: { goods: Dec40; excessValue: Dec40; adders: LineAdders<Dec40> } | undefined, assembly: Dec40, landed: Dec40) => {
-    if (part) {
-      const a = part.adders;
-      c.goods = c.goods.plus(part.goods);
-      c.excessValue = c.excessValue.plus(part.excessValue);
-      c.origin = c.origin.plus(a.origin);
-      c.freight = c.freight.plus(a.freight);
-      c.insurance = c.insurance.plus(a.insurance);
-      c.duty = c.duty.plus(a.duty);
-      c.fees = c.fees.plus(a.fees);
-      c.destination = c.destination.plus(a.destination);
-    }
-    c.assembly = c.assembly.plus(assembly);
-    c.landed = c.landed.plus(landed);
-    c.count += 1;
-  };
-  const addSupplier40 = (supplierId: string, goods: Dec40, excessValue: Dec40, landed: Dec40) => {
-    let s = bySupplier.get(supplierId);
-    if (!s) bySupplier.set(supplierId, (s = { goods: Dec40.ZERO, excessValue: Dec40.ZERO, landed: Dec40.ZERO, count: 0 }));
-    s.goods = s.goods.plus(goods);
-    s.excessValue = s.excessValue.plus(excessValue);
-    s.landed = s.landed.plus(landed);
-    s.count += 1;
-  };
-
   const lines = new Array<CostRollLine>(p.lines.length);
   const leftOut: Work[] = [];
   const dnp: Work[] = [];
@@ -1247,8 +1222,8 @@ function rollLines(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: 
       const excessInQuote = Dec40.micros(l.excessMicro);
       const excessValue = same ? excessInQuote : excessInQuote.times(rate);
       for (const r of cand.fx.rows) fxSeen.add(r);
-      addSupplier40(cand.slot.quote.supplierId, goods, excessValue, landed);
-      addTo(sumsOf(rank.part.category), { goods, excessValue, adders }, assembly, landed);
+      addSupplier(bySupplier, Dec40.ZERO, cand.slot.quote.supplierId, goods, excessValue, landed, 1);
+      addCharges(sumsOf(rank.part.category), { goods, excessValue, adders }, assembly, landed, 1);
       const price = Dec40.micros(l.priceMicro);
       const q = cand.slot.quote;
       const warningsOf = l.missingPins ? [{ code: 'missing_pins' as const, detail: rank.part.id }] : [];
@@ -1275,18 +1250,18 @@ function rollLines(p: PreparedCostRoll, buildQty: number, N: Dec, amortiseOver: 
         const goods = Dec40.of(w.goods!);
         const excessValue = Dec40.of(w.excessValue!);
         const landed = Dec40.of(w.landed);
-        addSupplier40(w.chosen.pq.quote.supplierId, goods, excessValue, landed);
+        addSupplier(bySupplier, Dec40.ZERO, w.chosen.pq.quote.supplierId, goods, excessValue, landed, 1);
         const a = w.adders!;
         const adders: LineAdders<Dec40> = {
           origin: Dec40.of(a.origin), freight: Dec40.of(a.freight), insurance: Dec40.of(a.insurance), customsValue: a.customsValue && Dec40.of(a.customsValue),
           duty: Dec40.of(a.duty), fees: Dec40.of(a.fees), destination: Dec40.of(a.destination), landed: Dec40.of(a.landed),
         };
-        addTo(sumsOf(w.category), { goods, excessValue, adders }, Dec40.of(w.assembly), landed);
+        addCharges(sumsOf(w.category), { goods, excessValue, adders }, Dec40.of(w.assembly), landed, 1);
       } else {
         costLineCharges(w, N, amortiseOver);
         costLinesPerUnit = add(costLinesPerUnit, w.costPerUnit ?? ZERO);
         oneTimeTotal = add(oneTimeTotal, w.oneTimeCost ?? ZERO);
-        addTo(sumsOf(w.category), undefined, Dec40.of(w.assembly), Dec40.of(w.landed));
+        addCharges(sumsOf(w.category), undefined, Dec40.of(w.assembly), Dec40.of(w.landed), 1);
       }
     } else (w.status === 'dnp' ? dnp : leftOut).push(w);
     lines[w.pl.index] = workOutput(w, N);

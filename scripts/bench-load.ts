@@ -51,6 +51,12 @@ async function main() {
     env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: url, PORT: String(port), PUBLIC_URL: base, SESSION_SECRET: 'load-test-secret-0123456789', SMTP_PORT: String(sink.smtpPort), S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, SERVE_CLIENT: 'false', LOG_LEVEL: 'error', RATE_LIMIT_AUTH_PER_MINUTE: '1000' },
     stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
   });
+  // Should this script die early (Ctrl-C, a closed pipe), the server and the cluster go with it.
+  process.once('exit', () => {
+    server.kill('SIGKILL');
+    database.stop();
+  });
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGPIPE'] as const) process.once(signal, () => process.exit(130));
   await new Promise<void>((resolve, reject) => {
     server.once('message', () => resolve());
     server.once('exit', (c) => reject(new Error(`server exited ${c}`)));

@@ -280,7 +280,8 @@ export function prepareCostRoll(input: CostRollInput, fxIndex?: FxIndex): Prepar
     }
     const attrition = pl.attrition ?? profile.attrition.get(part.category) ?? ZERO;
     const [reqNum, reqDen] = ratioOf(String(pl.line.qtyPerUnit), pl.qtyPerUnit, attrition);
-    pl.rank = { ...shared, attrition, reqNum, reqDen };
+    // Named fields, not a spread: one object shape for 10,000 lines.
+    pl.rank = { part: shared.part, duty: shared.duty, candidates: shared.candidates, fxMissing: shared.fxMissing, attrition, reqNum, reqDen };
   }
 
   return {

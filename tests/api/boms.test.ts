@@ -82,6 +82,29 @@ describe('BOMs, lines and the cost roll', () => {
     }
   });
 
+  it('the cost roll reads each quote as saved: validity dates, lead time, MOQ and order multiple', async () => {
+    const owner = ws.agents.owner;
+    const s = await makeSupplier(owner, { currency: 'USD', country: 'US', defaultIncoterm: 'DDP' });
+    const part = await makePart(owner, { internalPn: `TERMS-${Date.now()}` });
+    const terms = { currency: 'USD', incoterm: 'DDP' };
+    // The two cheapest are out of date: one expired, one not valid yet.
+    await makeQuote(owner, part.id, s.id, { ...terms, validUntil: '2020-01-31', priceBreaks: [{ minQty: 1, unitPrice: '0.0001' }] });
+    await makeQuote(owner, part.id, s.id, { ...terms, validFrom: '2099-01-01', priceBreaks: [{ minQty: 1, unitPrice: '0.0002' }] });
+    // No lead time given; MOQ 2,500 in multiples of 500.
+    const reel = await makeQuote(owner, part.id, s.id, { ...terms, leadTimeDays: null, moq: 2500, orderMultiple: 500, priceBreaks: [{ minQty: 1, unitPrice: '0.001000' }] });
+    const quick = await makeQuote(owner, part.id, s.id, { ...terms, leadTimeDays: 10, priceBreaks: [{ minQty: 1, unitPrice: '0.004000' }] });
+    const lineOf = async (profileId: string) => {
+      const bom = await newBom({ profileId });
+      await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R1', partId: part.id, qtyPerUnit: '1' }).expect(201);
+      return (await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).expect(200)).body.lines[0];
+    };
+    // 1,000 needed: the reel's 2,500 at 0.001 (2.50, 1.50 of it excess) beats 1,000 at 0.004 (4.00).
+    expect(await lineOf(profile.id)).toMatchObject({ quoteId: reel.id, requiredQty: 1000, orderQty: 2500, goodsValue: '2.500000', excessValue: '1.500000' });
+    // With a lead-time limit a quote without a lead time cannot pass it (costing.md).
+    const limited = await makeProfile(owner, { maxLeadTimeDays: 30 });
+    expect(await lineOf(limited.id)).toMatchObject({ quoteId: quick.id, orderQty: 1000, goodsValue: '4.000000' });
+  });
+
   it('bulk edits apply in one transaction: one stale version and nothing changes', async () => {
     const bom = await newBom();
     const d = ws.agents.designer;

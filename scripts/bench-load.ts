@@ -66,7 +66,8 @@ async function main() {
   try {
     const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-requested-with': 'farthing' }, body: JSON.stringify({ email: 'owner@tinbell.example', password: demoPassword }) });
     const cookie = (login.headers.get('set-cookie') ?? '').split(';')[0];
-    const headers = { cookie, 'x-requested-with': 'farthing', 'content-type': 'application/json' };
+    // As a browser sends them: it always offers gzip (stored answers go compressed then).
+    const headers = { cookie, 'x-requested-with': 'farthing', 'content-type': 'application/json', 'accept-encoding': 'gzip, deflate, br' };
     const versions = new Map<string, number>(lineIds.map((id) => [id, 1]));
     let nextLine = 0;
     const routes: { name: string; share: number; opts: Partial<autocannon.Options> }[] = [

@@ -1,5 +1,8 @@
+import { promisify } from 'node:util';
+import { gzip } from 'node:zlib';
 import type { Knex } from 'knex';
 import type { DbOrTrx } from '../db/knex';
+import type { Request } from 'express';
 import type { Deps } from '../deps';
 import { scoped } from '../db/scope';
 import { today } from '../quotes/repository';
@@ -73,11 +76,16 @@ async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch
     const bom = await getBom(db, workspaceId, given.id);
     const [cost, check] = await Promise.all([costOf(db, workspaceId, bom), releaseGuards.stressCheck(db, workspaceId, bom)]);
     const stress: StoredStress = { tally: check?.summary ?? null, check };
+    const resultText = JSON.stringify(cost);
+    const checkText = JSON.stringify(check);
+    // Compressed once here (on libuv's threads), not on every read.
+    const [resultGzip, checkGzip] = await Promise.all([gzipText(resultText), check ? gzipText(checkText) : null]);
     const row = {
       bomId: bom.id, workspaceId, epoch: e, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency,
       landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
       warnings: cost.warnings.length + cost.lineWarningCount,
-      totals: JSON.stringify(cost.totals), result: JSON.stringify(cost), stress: JSON.stringify(stress), computedAt: db.fn.now(),
+      totals: JSON.stringify(cost.totals), result: resultText, stress: `{"tally":${JSON.stringify(stress.tally)},"check":${checkText}}`,
+      resultGzip, checkGzip, computedAt: db.fn.now(),
     };
     await db('cost_rollups').insert(row).onConflict('bom_id').merge();
     return { cost, stress };
@@ -128,28 +136,42 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   return out;
 }
 
-type StoredText = { epoch: string; costingDate: string; qty: number; complete: boolean; text: string | null };
+type StoredText = { epoch: string; costingDate: string; qty: number; complete: boolean; text?: string | null; gzip?: Buffer | null };
 
-/** One stored part of a BOM's roll-up as JSON text, with what says whether it is fresh. */
-async function storedText(deps: Deps, workspaceId: string, bom: BomRow, text: string): Promise<{ epoch: string; stored: StoredText | undefined }> {
+/**
+ * One stored part of a BOM's roll-up, with what says whether it is fresh: its gzip
+ * when the client takes gzip, else its JSON text.
+ */
+async function storedAnswer(deps: Deps, workspaceId: string, bom: BomRow, part: { text: string; gzip?: 'result_gzip' | 'check_gzip' }): Promise<{ epoch: string; stored: StoredText | undefined }> {
+  const db = deps.db;
+  // A result stored before `lineWarningCount` existed, or before the gzip was kept, is computed again.
+  const answer = part.gzip
+    ? [db.raw(`${part.gzip} IS NOT NULL AS complete`), db.raw(`${part.gzip} AS gzip`)]
+    : [db.raw(`jsonb_exists(result, 'lineWarningCount') AS complete`), db.raw(`${part.text} AS text`)];
   const [epoch, stored] = await Promise.all([
-    epochOf(deps.db, workspaceId),
-    scoped(deps.db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
-      // A result stored before `lineWarningCount` existed is computed again.
-      .first('epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`jsonb_exists(result, 'lineWarningCount') AS complete`), deps.db.raw(`${text} AS text`)) as Promise<StoredText | undefined>,
+    epochOf(db, workspaceId),
+    scoped(db, 'cost_rollups', workspaceId).andWhere({ bomId: bom.id })
+      .first('epoch', db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', ...answer) as Promise<StoredText | undefined>,
   ]);
   return { epoch, stored };
 }
 
-const freshText = (s: StoredText | undefined, epoch: string, bom: BomRow) => (s?.text && s.complete && isFresh(s, epoch, bom) ? new RawJson(s.text) : null);
+function freshAnswer(s: StoredText | undefined, epoch: string, bom: BomRow): RawJson | null {
+  if (!s?.complete || !isFresh(s, epoch, bom)) return null;
+  if (s.gzip) return new RawJson('', s.gzip);
+  return s.text ? new RawJson(s.text) : null;
+}
+
+/** Whether a request takes a gzip answer (every browser says so; no header means no). */
+export const takesGzip = (req: Request) => Boolean(req.headers['accept-encoding']) && req.acceptsEncodings('gzip', 'identity') === 'gzip';
 
 /**
- * The cost roll at the planned quantity today: the stored one when fresh (sent as the text
- * it is stored as), else computed and stored.
+ * The cost roll at the planned quantity today: the stored one when fresh (sent as it is
+ * stored, compressed or as text), else computed and stored.
  */
-export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView | RawJson> {
-  const { epoch, stored } = await storedText(deps, workspaceId, bom, 'result::text');
-  return freshText(stored, epoch, bom) ?? refreshRollup(deps.db, workspaceId, bom, epoch);
+export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow, gzipOk = false): Promise<CostView | RawJson> {
+  const { epoch, stored } = await storedAnswer(deps, workspaceId, bom, { text: 'result::text', gzip: gzipOk ? 'result_gzip' : undefined });
+  return freshAnswer(stored, epoch, bom) ?? refreshRollup(deps.db, workspaceId, bom, epoch);
 }
 
 /**
@@ -158,8 +180,8 @@ export async function plannedCost(deps: Deps, workspaceId: string, bom: BomRow):
  * queues stores the whole one).
  */
 export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow): Promise<CostView | RawJson> {
-  const { epoch, stored } = await storedText(deps, workspaceId, bom, `jsonb_set(result, '{lines}', '[]')::text`);
-  const fresh = freshText(stored, epoch, bom);
+  const { epoch, stored } = await storedAnswer(deps, workspaceId, bom, { text: `jsonb_set(result, '{lines}', '[]')::text` });
+  const fresh = freshAnswer(stored, epoch, bom);
   if (fresh) return fresh;
   await queueRefresh(deps, workspaceId);
   return costTotalsOf(deps.db, workspaceId, bom);
@@ -169,13 +191,18 @@ export async function plannedTotals(deps: Deps, workspaceId: string, bom: BomRow
  * The stress check: the one stored with a fresh roll-up, with the waivers read now (sent
  * as stored when the BOM has none), else checked now and a refresh queued.
  */
-export async function plannedStress(deps: Deps, workspaceId: string, bom: BomRow): Promise<StressCheckView | RawJson> {
-  const [{ epoch, stored }, waived] = await Promise.all([storedText(deps, workspaceId, bom, `(stress -> 'check')::text`), hasWaivers(deps.db, workspaceId, bom.id)]);
-  const fresh = freshText(stored, epoch, bom);
+export async function plannedStress(deps: Deps, workspaceId: string, bom: BomRow, gzipOk = false): Promise<StressCheckView | RawJson> {
+  const check = (gzip: boolean) => storedAnswer(deps, workspaceId, bom, { text: `(stress -> 'check')::text`, gzip: gzip ? 'check_gzip' : undefined });
+  const [read, waived] = await Promise.all([check(gzipOk), hasWaivers(deps.db, workspaceId, bom.id)]);
+  // Waivers are added to the stored check's text (rare: most BOMs have none).
+  const { epoch, stored } = waived && gzipOk ? await check(false) : read;
+  const fresh = freshAnswer(stored, epoch, bom);
   if (fresh && fresh.text !== 'null') return waived ? withWaivers(deps.db, workspaceId, JSON.parse(fresh.text) as StressCheckView) : fresh;
   if (!stored || !isFresh(stored, epoch, bom)) await queueRefresh(deps, workspaceId);
   return stressOf(deps.db, workspaceId, bom);
 }
+
+const gzipText = async (text: string): Promise<Buffer> => promisify(gzip)(text);
 
 /** Queues one refresh of a workspace's stale roll-ups (at most one waiting per workspace). */
 export async function queueRefresh(deps: Deps, workspaceId: string): Promise<void> {

@@ -11,7 +11,7 @@ import { audit } from '../audit/repository';
 import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
 import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
-import { rollupsFor, storedRollups, plannedCost, plannedTotals } from './rollups';
+import { rollupsFor, storedRollups, plannedCost, plannedTotals, takesGzip } from './rollups';
 import { releaseGuards } from './release-guards';
 import { today } from '../quotes/repository';
 import { importBom } from './import';
@@ -179,13 +179,13 @@ export const bomRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/cost', access: 'boms.read', tag: 'Cost roll',
     summary: 'The cost roll: landed cost per unit at a build quantity (default: planned) and costing date (default: today), per line and in totals, in the reporting currency.',
     params: idParams, query: costQuery,
-    handler: async ({ auth, params, query, deps }) => {
+    handler: async ({ req, auth, params, query, deps }) => {
       const bom = await getBom(deps.db, auth.workspaceId, params.id);
       const planned = (query.qty === undefined || query.qty === bom.plannedQty) && (query.date === undefined || query.date === today());
       if (query.view === 'totals') {
         return planned ? plannedTotals(deps, auth.workspaceId, bom) : costTotalsOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
       }
-      return planned ? plannedCost(deps, auth.workspaceId, bom) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
+      return planned ? plannedCost(deps, auth.workspaceId, bom, takesGzip(req)) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
     },
   }),
   route({

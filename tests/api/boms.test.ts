@@ -1,3 +1,4 @@
+import { gunzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startTestApp, signUp, type TestApp } from '../helpers/app';
 import { snapshot } from '../helpers/db';
@@ -225,6 +226,27 @@ describe('the stored roll-up', () => {
     expect(await epoch()).not.toBe(before);
     await expect.poll(async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id).cost, { timeout: 10_000 })
       .toMatchObject({ landedPerUnit: '0.0240000000', fresh: true });
+  });
+
+  it('a fresh stored cost roll goes to a browser gzip-compressed as stored, and as JSON text to a client that does not ask', async () => {
+    const bom = await newBom({ plannedQty: 1000 });
+    await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R1-R4', partId: partA.id, qtyPerUnit: '4' }).expect(201);
+    const computed = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', 'gzip').expect(200);
+    const row = await t.database.db('cost_rollups').where({ bomId: bom.id }).first('resultGzip');
+    expect(gunzipSync(row.resultGzip).toString('utf8')).toBe(JSON.stringify(computed.body));
+    const zipped = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', 'gzip, deflate, br').expect(200);
+    expect(zipped.headers['content-encoding']).toBe('gzip');
+    expect(zipped.headers.vary).toMatch(/Accept-Encoding/);
+    expect(zipped.body).toEqual(computed.body);
+    // No Accept-Encoding, or one without gzip: the stored JSON text.
+    for (const encoding of [undefined, 'identity', 'br;q=1, gzip;q=0']) {
+      const req = ws.agents.viewer.get(`/api/boms/${bom.id}/cost`);
+      if (encoding) req.set('Accept-Encoding', encoding);
+      else req.unset('Accept-Encoding');
+      const plain = await req.expect(200);
+      expect(plain.headers['content-encoding'], encoding).toBeUndefined();
+      expect(plain.body).toEqual(computed.body);
+    }
   });
 
   it('snapshots and revisions compare per line and in totals', async () => {

@@ -61,13 +61,18 @@ describe('the stress check', () => {
     await ws.agents.viewer.get(`/api/boms/${id}/cost`).expect(200);
     const row = await db('cost_rollups').where({ bomId: id }).first(db.raw(`stress -> 'check' -> 'summary' AS summary`));
     expect(row.summary).toEqual(live.summary);
-    const stored = await ws.agents.viewer.get(`/api/boms/${id}/stress`).expect(200);
+    const stored = await ws.agents.viewer.get(`/api/boms/${id}/stress`).set('Accept-Encoding', 'gzip, deflate, br').expect(200);
     expect(stored.headers['content-type']).toMatch(/application\/json/);
+    // To a browser (it accepts gzip) the stored check goes as it was compressed when stored.
+    expect(stored.headers['content-encoding']).toBe('gzip');
     expect(stored.body).toEqual(live);
+    const plain = await ws.agents.viewer.get(`/api/boms/${id}/stress`).set('Accept-Encoding', 'identity').expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.body).toEqual(live);
     expect(stored.body.lines[0]).toMatchObject({ lineId: line.id, internalPn: 'C-1N-2KV', status: 'beyond_policy', waiver: null });
     // A waiver is not a costing input: the roll-up stays fresh and the waiver shows on it.
     await d.post(`/api/boms/${id}/lines/${line.id}/waivers`).send({ reason: 'Potted module; approved after the humidity test.' }).expect(201);
-    const waived = (await ws.agents.viewer.get(`/api/boms/${id}/stress`).expect(200)).body;
+    const waived = (await ws.agents.viewer.get(`/api/boms/${id}/stress`).set('Accept-Encoding', 'gzip').expect(200)).body;
     expect(waived.lines[0].waiver).toMatchObject({ reason: 'Potted module; approved after the humidity test.', waivedBy: expect.any(String) });
     expect((await db('cost_rollups').where({ bomId: id }).first(db.raw(`stress -> 'check' -> 'summary' AS summary`))).summary).toEqual(live.summary);
   });

@@ -1,4 +1,4 @@
-import type { DbOrTrx } from '../db/knex';
+import { camelColumns, type DbOrTrx } from '../db/knex';
 import { scoped } from '../db/scope';
 import type { CostRollInput, BomLine, Part, LandedCostProfile } from '../costing';
 import { quotesForCosting } from '../quotes/repository';
@@ -42,10 +42,10 @@ export async function loadCostingData(db: DbOrTrx, workspaceId: string, bom: Bom
   const bomParts = 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
   const [lines, parts, quotes, suppliers, profile, fxRates, pivot] = await inParallel(db, [
     // Only the columns read: a 10,000-line BOM's timestamps alone took longer to parse than the rest.
-    () => scoped(db, 'bom_lines', workspaceId).andWhere({ bomId: bom.id }).orderBy([{ column: 'position' }, { column: 'id' }]).select(COSTING_LINE_COLUMNS) as unknown as Promise<CostingLine[]>,
+    () => scoped(db, 'bom_lines', workspaceId).andWhere({ bomId: bom.id }).orderBy([{ column: 'position' }, { column: 'id' }]).select(camelColumns(db, COSTING_LINE_COLUMNS)) as unknown as Promise<CostingLine[]>,
     () => scoped(db, 'parts', workspaceId)
       .andWhereRaw(`id = ANY(${bomParts})`, [workspaceId, bom.id])
-      .select('id', 'internalPn', 'mpn', 'manufacturer', 'category', 'mount', 'pins', 'hsCode', 'unitWeightG') as Promise<CostingData['parts']>,
+      .select(camelColumns(db, ['id', 'internalPn', 'mpn', 'manufacturer', 'category', 'mount', 'pins', 'hsCode', 'unitWeightG'])) as Promise<CostingData['parts']>,
     () => quotesForCosting(db, workspaceId, { bomId: bom.id }),
     // All the workspace's suppliers (tens, not thousands): no wait for the quotes first.
     () => scoped(db, 'suppliers', workspaceId).select('id', 'active', 'name') as Promise<{ id: string; active: boolean; name: string }[]>,

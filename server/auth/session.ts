@@ -11,12 +11,47 @@ import { verifyPassword, dummyHash } from './passwords';
 
 const PgStore = connectPgSimple(session);
 
+/** A session's expiry is written back at most this often (sessions last 14 days). */
+const TOUCH_EVERY_MS = 10 * 60 * 1000;
+
+/**
+ * The PostgreSQL store, writing a session's new expiry at most every ten minutes rather
+ * than on every request: express-session touches the store on each request and holds the
+ * response until the UPDATE commits. Each server remembers only when it last wrote which
+ * session; forgetting (a restart, another server) just means one more write.
+ */
+class SessionStore extends PgStore {
+  private touched = new Map<string, number>();
+
+  private remember(sid: string) {
+    if (this.touched.size >= 100_000) this.touched.clear();
+    this.touched.set(sid, Date.now());
+  }
+
+  override set(sid: string, sess: session.SessionData, fn?: (err?: unknown) => void) {
+    this.remember(sid);
+    super.set(sid, sess, fn);
+  }
+
+  override touch(sid: string, sess: session.SessionData, fn?: (err?: unknown) => void) {
+    const last = this.touched.get(sid);
+    if (last !== undefined && Date.now() - last < TOUCH_EVERY_MS) return fn?.();
+    this.remember(sid);
+    super.touch(sid, sess, fn);
+  }
+
+  override destroy(sid: string, fn?: (err?: unknown) => void) {
+    this.touched.delete(sid);
+    super.destroy(sid, fn);
+  }
+}
+
 /** Sessions live in PostgreSQL so any app server can serve any request. */
 export function createSessionMiddleware(config: Config, logger: Logger) {
   const pool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 5000 });
   // An idle client that loses its server (the database restarted) must not crash the process.
   pool.on('error', () => undefined);
-  const store = new PgStore({
+  const store = new SessionStore({
     pool,
     tableName: 'session',
     pruneSessionInterval: config.NODE_ENV === 'test' ? false : 15 * 60,

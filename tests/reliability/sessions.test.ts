@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import passport from 'passport';
 import { routeTable } from '../../server/routes';
@@ -29,6 +29,31 @@ describe('sessions and access', () => {
     expect(sid(login)).toBeDefined();
     expect(sid(login)).not.toBe(planted);
     await raw.get('/api/auth/me').set('Cookie', planted).expect(401);
+  });
+
+  it('activity keeps a session alive, writing its expiry at most every ten minutes', async () => {
+    const { body } = await signUp(t);
+    const agent = t.agent();
+    await agent.post('/api/auth/login').send({ email: body.email, password: body.password }).expect(200);
+    const expiry = async () => {
+      const r = await t.database.db.raw(`SELECT expire FROM session WHERE sess::jsonb -> 'passport' ->> 'user' = (SELECT id::text FROM users WHERE email = ?)`, [body.email]);
+      return new Date(r.rows[0].expire).getTime();
+    };
+    const signedIn = await expiry();
+    expect(signedIn).toBeGreaterThan(Date.now() + 13 * 24 * 3600 * 1000);
+    // Requests straight after sign-in write nothing back.
+    await t.database.db('session').whereRaw(`sess::jsonb -> 'passport' ->> 'user' = (SELECT id::text FROM users WHERE email = ?)`, [body.email]).update({ expire: new Date(signedIn - 60_000) });
+    await agent.get('/api/auth/me').expect(200);
+    expect(await expiry()).toBe(signedIn - 60_000);
+    // Eleven minutes on, the next request moves the expiry forward again.
+    const now = Date.now();
+    const clock = vi.spyOn(Date, 'now').mockReturnValue(now + 11 * 60_000);
+    try {
+      await agent.get('/api/auth/me').expect(200);
+    } finally {
+      clock.mockRestore();
+    }
+    expect(await expiry()).toBeGreaterThan(now + 11 * 60_000 + 13 * 24 * 3600 * 1000);
   });
 
   it('sign-out invalidates the session on the server, not only in the browser', async () => {

@@ -180,12 +180,16 @@ export const bomRoutes: RouteDef[] = [
     summary: 'The cost roll: landed cost per unit at a build quantity (default: planned) and costing date (default: today), per line and in totals, in the reporting currency.',
     params: idParams, query: costQuery,
     handler: async ({ req, auth, params, query, deps }) => {
+      // The usual read (planned quantity, today) takes the BOM with its stored roll-up.
+      if (query.qty === undefined && query.date === undefined) {
+        return query.view === 'totals' ? plannedTotals(deps, auth.workspaceId, params.id) : plannedCost(deps, auth.workspaceId, params.id, takesGzip(req));
+      }
       const bom = await getBom(deps.db, auth.workspaceId, params.id);
       const planned = (query.qty === undefined || query.qty === bom.plannedQty) && (query.date === undefined || query.date === today());
       if (query.view === 'totals') {
-        return planned ? plannedTotals(deps, auth.workspaceId, bom) : costTotalsOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
+        return planned ? plannedTotals(deps, auth.workspaceId, bom.id) : costTotalsOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
       }
-      return planned ? plannedCost(deps, auth.workspaceId, bom, takesGzip(req)) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
+      return planned ? plannedCost(deps, auth.workspaceId, bom.id, takesGzip(req)) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
     },
   }),
   route({

@@ -67,7 +67,7 @@ export const stressRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/stress', access: 'boms.read', tag: 'Stress check',
     summary: "The stress check: every rated line's checks at its operating point under the BOM's policy (applied, rated, ratio, limit, status, formula), the line's worst status, a tally and the caution.",
     params: idParams,
-    handler: async ({ req, auth, params, deps }) => plannedStress(deps, auth.workspaceId, await getBom(deps.db, auth.workspaceId, params.id), takesGzip(req)),
+    handler: async ({ req, auth, params, deps }) => plannedStress(deps, auth.workspaceId, params.id, takesGzip(req)),
   }),
   route({
     method: 'post', path: '/api/boms/:id/lines/:lineId/waivers', access: 'boms.write', tag: 'Stress check', status: 201,

@@ -61,7 +61,10 @@ async function main() {
     server.once('message', () => resolve());
     server.once('exit', (c) => reject(new Error(`server exited ${c}`)));
   });
-  const rss = () => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${server.pid}/status`, 'utf8'))![1]) / 1024;
+  // The server's memory: its processes' together (one per core under NODE_ENV=production).
+  const rssOf = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))![1]) / 1024;
+  const childrenOf = (pid: number) => readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
+  const rss = () => [server.pid!, ...childrenOf(server.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0);
 
   try {
     const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-requested-with': 'farthing' }, body: JSON.stringify({ email: 'owner@tinbell.example', password: demoPassword }) });
@@ -116,7 +119,7 @@ async function main() {
       const summary = {
         run, seconds, connections, totalRequests: outs.reduce((n, o) => n + o.requests, 0),
         throughputPerSec: outs.reduce((n, o) => n + o.throughputPerSec, 0), errors: outs.reduce((n, o) => n + o.errors, 0),
-        serverRssMb: Math.round(rss()), routes: outs,
+        serverRssMb: Math.round(rss()), serverProcesses: childrenOf(server.pid!).length || 1, routes: outs,
       };
       console.log(JSON.stringify(summary));
       results.push(summary);

@@ -34,6 +34,8 @@ const schema = z.object({
   MAIL_WORKER: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(1),
   MAX_IMPORT_MB: z.coerce.number().min(1).max(200).default(10),
+  /** Server processes on this machine; default one per core in production, else one. */
+  WEB_CONCURRENCY: z.coerce.number().int().min(1).max(64).optional(),
 });
 
 export type Config = z.infer<typeof schema>;

@@ -1,29 +1,74 @@
+import cluster from 'node:cluster';
+import { availableParallelism } from 'node:os';
 import { loadConfig } from './config';
 import { createDb } from './db/knex';
 import { createApp } from './app';
 
-/** Starts one stateless app server; several can run side by side on one database. */
+/**
+ * Starts the app: one stateless server process per core in production (WEB_CONCURRENCY
+ * sets the number), sharing the port through node:cluster. Nothing lives in a process,
+ * so any of them answers any request, as separate machines would.
+ */
 const config = loadConfig();
-const db = createDb(config.DATABASE_URL);
-const { app, deps, close } = createApp({ db, config });
+const processes = config.WEB_CONCURRENCY ?? (config.NODE_ENV === 'production' ? availableParallelism() : 1);
 
-const server = app.listen(config.PORT, config.HOST, () => {
-  deps.logger.info({ url: config.PUBLIC_URL, port: config.PORT }, 'Farthing is listening');
-  process.send?.({ ready: true, port: config.PORT });
-});
+if (processes > 1 && cluster.isPrimary) runPrimary(processes);
+else runServer();
 
-let stopping = false;
-async function stop(signal: string) {
-  if (stopping) return;
-  stopping = true;
-  deps.logger.info({ signal }, 'stopping');
-  server.close();
-  server.closeAllConnections();
-  await close().catch(() => undefined);
-  await db.destroy().catch(() => undefined);
-  process.exit(0);
+function runServer() {
+  const db = createDb(config.DATABASE_URL);
+  const { app, deps, close } = createApp({ db, config });
+
+  const server = app.listen(config.PORT, config.HOST, () => {
+    deps.logger.info({ url: config.PUBLIC_URL, port: config.PORT, pid: process.pid }, 'Farthing is listening');
+    process.send?.({ ready: true, port: config.PORT });
+  });
+
+  let stopping = false;
+  async function stop(signal: string) {
+    if (stopping) return;
+    stopping = true;
+    deps.logger.info({ signal }, 'stopping');
+    server.close();
+    server.closeAllConnections();
+    await close().catch(() => undefined);
+    await db.destroy().catch(() => undefined);
+    process.exit(0);
+  }
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
+  // A lost database connection must never take the process down; requests answer 503 meanwhile.
+  process.on('unhandledRejection', (err) => deps.logger.error({ err }, 'unhandled rejection'));
 }
-process.on('SIGINT', () => void stop('SIGINT'));
-process.on('SIGTERM', () => void stop('SIGTERM'));
-// A lost database connection must never take the process down; requests answer 503 meanwhile.
-process.on('unhandledRejection', (err) => deps.logger.error({ err }, 'unhandled rejection'));
+
+/** Forks the servers, says ready when all listen, replaces one that dies, and stops them all. */
+function runPrimary(n: number) {
+  let listening = 0;
+  let stopping = false;
+  const log = (s: string) => config.LOG_LEVEL !== 'silent' && console.error(`[farthing] ${s}`);
+  for (let i = 0; i < n; i++) cluster.fork();
+  cluster.on('message', (_worker, message: { ready?: boolean; port?: number }) => {
+    if (message?.ready && ++listening === n) process.send?.({ ready: true, port: message.port, processes: n });
+  });
+  cluster.on('exit', (worker, code, signal) => {
+    if (stopping) return;
+    // One that dies before all are up is a start-up fault (a bad setting, a taken port): stop.
+    if (listening < n) {
+      log(`a server process exited (${signal ?? code}) while starting`);
+      void stop(1);
+      return;
+    }
+    log(`server process ${worker.process.pid} exited (${signal ?? code}); starting another`);
+    cluster.fork();
+  });
+  async function stop(code = 0) {
+    if (stopping) return;
+    stopping = true;
+    const workers = Object.values(cluster.workers ?? {}).filter((w) => w !== undefined);
+    for (const w of workers) if (!w.isDead()) w.process.kill('SIGTERM');
+    await Promise.all(workers.map((w) => (w.isDead() ? null : new Promise((r) => w.once('exit', r)))));
+    process.exit(code);
+  }
+  process.on('SIGINT', () => void stop());
+  process.on('SIGTERM', () => void stop());
+}

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
@@ -19,6 +19,7 @@ let sink: MailSink;
 let s3: S3Fake;
 let s3Dir: string;
 const servers: { proc: ChildProcess; url: string }[] = [];
+let env: Record<string, string>;
 
 async function startServer(env: Record<string, string>): Promise<{ proc: ChildProcess; url: string }> {
   const port = await freePort();
@@ -38,7 +39,7 @@ beforeAll(async () => {
   sink = await startMailSink();
   s3Dir = mkdtempSync(join(tmpdir(), 'farthing-s3-two-'));
   s3 = await startS3Fake({ directory: s3Dir, bucket: 'farthing' });
-  const env = {
+  env = {
     DATABASE_URL: database.url, SESSION_SECRET: 'shared-secret-of-both-servers', SMTP_PORT: String(sink.smtpPort),
     S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, JOB_POLL_SECONDS: '0.5', PUBLIC_URL: 'http://127.0.0.1:4100',
   };
@@ -108,4 +109,32 @@ describe('two servers side by side', () => {
     await send(a.url).patch(`/api/quotes/${quote.id}`, { version: quote.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0070' }] }).expect(200);
     await expect.poll(onB, { timeout: 10_000 }).toBe('0.0070000000');
   });
+
+  it('one per core: a server started with WEB_CONCURRENCY=2 runs two processes on one port, replaces one that dies, and stops them all', async () => {
+    const port = await freePort();
+    const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'silent', SERVE_CLIENT: 'false', MAIL_WORKER: 'false' },
+      stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+    });
+    const url = `http://127.0.0.1:${port}`;
+    const children = () => readFileSync(`/proc/${proc.pid}/task/${proc.pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
+    try {
+      const ready = await new Promise<{ processes: number }>((resolve, reject) => {
+        proc.once('message', (m) => resolve(m as { processes: number }));
+        proc.once('exit', (code) => reject(new Error(`server exited ${code}`)));
+      });
+      expect(ready.processes).toBe(2);
+      const first = children();
+      expect(first).toHaveLength(2);
+      await request(url).get('/api/auth/me').expect(401);
+      process.kill(first[0], 'SIGKILL');
+      await expect.poll(() => children().filter((pid) => pid !== first[0]).length, { timeout: 15_000 }).toBe(2);
+      for (let i = 0; i < 6; i++) await request(url).get('/api/auth/me').expect(401);
+    } finally {
+      const all = children();
+      proc.kill('SIGTERM');
+      await new Promise((r) => proc.once('exit', r));
+      for (const pid of all) expect(existsSync(`/proc/${pid}`) && !readFileSync(`/proc/${pid}/status`, 'utf8').includes('State:\tZ'), `process ${pid}`).toBe(false);
+    }
+  }, 60_000);
 });

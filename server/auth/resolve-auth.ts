@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import { hashSecret } from './secret-tokens';
 import { usersRepo } from './repository';
 import { errors } from '../http/errors';
+import { membershipReadWithSession } from './session';
 
 /**
  * Works out who is asking, once per request: a Bearer API token (acting as its user in
@@ -31,8 +32,10 @@ export function resolveAuth(db: Knex) {
       const userId = (req.user as { id?: string } | undefined)?.id;
       const workspaceId = req.session?.workspaceId;
       if (userId && workspaceId) {
-        const m = await usersRepo.membership(db, userId, workspaceId);
-        if (m) req.auth = { userId, workspaceId, role: m.role, via: 'session' };
+        // Read with the session when it was loaded (one statement for both), else now.
+        const read = membershipReadWithSession(req);
+        const role = read && read.userId === String(userId) && read.workspaceId === String(workspaceId) ? read.role : (await usersRepo.membership(db, userId, workspaceId))?.role;
+        if (role) req.auth = { userId, workspaceId, role, via: 'session' };
       }
       next();
     } catch (err) {

@@ -115,6 +115,24 @@ describe('invite and accept', () => {
   });
 });
 
+describe('roles apply at once', () => {
+  it("a member's next request after a role change or removal uses the new role, signed in all along", async () => {
+    const owner = await signUp(t);
+    const email = `mover-${Date.now()}@tinbell.example`;
+    await owner.agent.post('/api/invites').send({ email, role: 'designer' }).expect(201);
+    const token = linkIn((await waitForMail(t.sink, email)).text, '/invite');
+    const member = t.agent();
+    const accepted = await member.post('/api/invites/accept').send({ token, name: 'Mover', password: 'mover password 1' }).expect(200);
+    const partBody = () => ({ internalPn: `MV-${Date.now()}-${Math.random()}`, category: 'other' });
+    await member.post('/api/parts').send(partBody()).expect(201);
+    await owner.agent.patch(`/api/members/${accepted.body.user.id}`).send({ role: 'viewer' }).expect(200);
+    await member.post('/api/parts').send(partBody()).expect(403);
+    expect((await member.get('/api/auth/me').expect(200)).body.role).toBe('viewer');
+    await owner.agent.delete(`/api/members/${accepted.body.user.id}`).expect(204);
+    await member.get('/api/parts').expect(401);
+  });
+});
+
 describe('password reset', () => {
   it('a reset link by mail sets a new password once and signs out other sessions', async () => {
     const { agent, body } = await signUp(t);

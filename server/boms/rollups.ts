@@ -85,7 +85,7 @@ async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch
       bomId: bom.id, workspaceId, epoch: e, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency,
       landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
       warnings: cost.warnings.length + cost.lineWarningCount,
-      totals: JSON.stringify(cost.totals), result: resultText, stress: `{"tally":${JSON.stringify(stress.tally)},"check":${checkText}}`,
+      totals: JSON.stringify(cost.totals), result: resultText, stress: `{"tally":${JSON.stringify(stress.tally)},"check":${checkText}}`, stressTally: JSON.stringify(stress.tally),
       resultGzip, checkGzip, computedAt: db.fn.now(),
     };
     await db('cost_rollups').insert(row).onConflict('bom_id').merge();
@@ -99,21 +99,49 @@ async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch
   }
 }
 
-/** The workspace's stored roll-ups (no results: what the BOM list shows) and its costing epoch. */
-export async function storedRollups(deps: Deps, workspaceId: string) {
-  const [epoch, stored] = await Promise.all([
-    epochOf(deps.db, workspaceId),
-    scoped(deps.db, 'cost_rollups', workspaceId)
-      .select('bomId', 'workspaceId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', 'currency', 'landedPerUnit', 'targetUnitCost', 'leftOut', 'warnings', 'totals', 'computedAt',
-        // The tally only: the stored check of a large BOM is far larger than the list needs.
-        deps.db.raw(`stress -> 'tally' AS stress_tally`), deps.db.raw(`jsonb_exists(stress, 'check') AS has_stress`)) as Promise<RollupRow[]>,
-  ]);
-  return { epoch, byBom: new Map(stored.map((r) => [r.bomId, r])) };
+/**
+ * The BOM list's read in one statement: the workspace's BOMs (optionally by name), each
+ * with its line count and stored roll-up (no results: what the list shows), and the
+ * costing epoch. A roll-up without a gzip was stored before the stress check was kept
+ * with it (its `hasStress` is false: it is computed again).
+ */
+export async function bomsWithRollups(db: DbOrTrx, workspaceId: string, nameLike?: string) {
+  const { rows } = (await db.raw(
+    `SELECT b.*, (SELECT count(*) FROM bom_lines l WHERE l.workspace_id = b.workspace_id AND l.bom_id = b.id)::int AS "lineCount",
+            w.costing_epoch AS "workspaceEpoch", r.epoch AS "rEpoch", to_char(r.costing_date, 'YYYY-MM-DD') AS "rCostingDate", r.qty AS "rQty",
+            r.currency AS "rCurrency", r.landed_per_unit AS "rLandedPerUnit", r.target_unit_cost AS "rTargetUnitCost", r.left_out AS "rLeftOut",
+            r.warnings AS "rWarnings", r.stress_tally AS "rStressTally", r.result_gzip IS NOT NULL AS "rHasStress"
+       FROM boms b JOIN workspaces w ON w.id = b.workspace_id
+       LEFT JOIN cost_rollups r ON r.bom_id = b.id AND r.workspace_id = b.workspace_id
+      WHERE b.workspace_id = ? ${nameLike === undefined ? '' : 'AND b.name ILIKE ?'}
+      ORDER BY b.name, b.revision DESC`,
+    nameLike === undefined ? [workspaceId] : [workspaceId, nameLike],
+  )) as { rows: Record<string, unknown>[] };
+  let epoch = '0';
+  const boms: BomRow[] = [];
+  const lineCount = new Map<string, number>();
+  const byBom = new Map<string, RollupRow>();
+  for (const row of rows) {
+    const { lineCount: n, workspaceEpoch, rEpoch, rCostingDate, rQty, rCurrency, rLandedPerUnit, rTargetUnitCost, rLeftOut, rWarnings, rStressTally, rHasStress, ...bom } = row;
+    epoch = String(workspaceEpoch);
+    const b = bom as unknown as BomRow;
+    boms.push(b);
+    lineCount.set(b.id, n as number);
+    if (rEpoch !== null) {
+      byBom.set(b.id, {
+        bomId: b.id, workspaceId, epoch: String(rEpoch), costingDate: rCostingDate as string, qty: rQty as number, currency: rCurrency as string,
+        landedPerUnit: rLandedPerUnit as string | null, targetUnitCost: rTargetUnitCost as string | null, leftOut: rLeftOut as number, warnings: rWarnings as number,
+        totals: undefined, stressTally: rStressTally as StoredStress['tally'], hasStress: Boolean(rHasStress),
+      });
+    }
+  }
+  // With no BOM the epoch is not needed: nothing is stale.
+  return { boms, lineCount, read: { epoch, byBom } };
 }
 
 /** For the BOM list: stored roll-ups, computing only those that never existed. */
-export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[], read?: Awaited<ReturnType<typeof storedRollups>>) {
-  const { epoch, byBom } = read ?? (await storedRollups(deps, workspaceId));
+export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[], read: { epoch: string; byBom: Map<string, RollupRow> }) {
+  const { epoch, byBom } = read;
   const out = new Map<string, RollupRow & { fresh: boolean }>();
   let stale = false;
   for (const bom of boms) {
@@ -226,12 +254,13 @@ export async function refreshWorkspace(deps: Deps, workspaceId: string): Promise
   const epoch = await epochOf(deps.db, workspaceId);
   const boms = (await scoped(deps.db, 'boms', workspaceId)) as BomRow[];
   const stored = (await scoped(deps.db, 'cost_rollups', workspaceId)
-    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`jsonb_exists(stress, 'check') AS has_stress`))) as RollupRow[];
+    // Read without opening the stored answers (large ones take long to decompress).
+    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`result_gzip IS NOT NULL AS has_stress`))) as RollupRow[];
   const byBom = new Map(stored.map((r) => [r.bomId, r]));
   let n = 0;
   for (const bom of boms) {
     const r = byBom.get(bom.id);
-    // One stored before the stress check was kept with it counts as stale.
+    // One stored before the stress check and the gzip were kept with it counts as stale.
     if (r?.hasStress && isFresh(r, epoch, bom)) continue;
     await refreshRollup(deps.db, workspaceId, bom, epoch);
     n++;

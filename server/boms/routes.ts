@@ -11,7 +11,7 @@ import { audit } from '../audit/repository';
 import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
 import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
-import { rollupsFor, storedRollups, plannedCost, plannedTotals, takesGzip } from './rollups';
+import { rollupsFor, bomsWithRollups, plannedCost, plannedTotals, takesGzip } from './rollups';
 import { releaseGuards } from './release-guards';
 import { today } from '../quotes/repository';
 import { importBom } from './import';
@@ -30,16 +30,9 @@ export const bomRoutes: RouteDef[] = [
     summary: 'The BOM list: every revision with its state and the landed cost per unit at its planned quantity (from the stored roll-up) against its target.',
     query: z.strictObject({ q: z.string().max(200).optional() }),
     handler: async ({ auth, query, deps }) => {
-      const q = scoped(deps.db, 'boms', auth.workspaceId).orderBy([{ column: 'name' }, { column: 'revision', order: 'desc' }]);
-      if (query.q) q.andWhere('name', 'ilike', `%${query.q.replace(/[%_\\]/g, '\\$&')}%`);
-      // Side by side: under load each sequential round trip waits its turn.
-      const [boms, counts, stored] = await Promise.all([
-        q as Promise<BomRow[]>,
-        scoped(deps.db, 'bom_lines', auth.workspaceId).groupBy('bomId').select('bomId').count('* as n') as Promise<{ bomId: string; n: string }[]>,
-        storedRollups(deps, auth.workspaceId),
-      ]);
-      const rollups = await rollupsFor(deps, auth.workspaceId, boms, stored);
-      const lineCount = new Map(counts.map((c) => [c.bomId, Number(c.n)]));
+      // One statement: under load each round trip waits its turn.
+      const { boms, lineCount, read } = await bomsWithRollups(deps.db, auth.workspaceId, query.q === undefined ? undefined : `%${query.q.replace(/[%_\\]/g, '\\$&')}%`);
+      const rollups = await rollupsFor(deps, auth.workspaceId, boms, read);
       return {
         items: boms.map((b) => {
           const r = rollups.get(b.id);

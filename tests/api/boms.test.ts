@@ -63,6 +63,19 @@ describe('BOMs, lines and the cost roll', () => {
     expect(perUnit[2]).toBeLessThan(perUnit[0]);
   });
 
+  it('the BOM list finds BOMs by name, with each one\'s line count; % and _ are plain characters', async () => {
+    const tag = `Q${Date.now()}`;
+    const a = await newBom({ name: `${tag} torch 100% brass` });
+    await newBom({ name: `${tag} torch 1000 brass` });
+    await ws.agents.designer.post(`/api/boms/${a.id}/lines`).send({ refDes: 'R1', partId: partA.id, qtyPerUnit: '1' }).expect(201);
+    const byName = async (q: string) => (await ws.agents.viewer.get('/api/boms').query({ q }).expect(200)).body.items as { id: string; name: string; lineCount: number }[];
+    expect((await byName(`${tag} TORCH`)).map((b) => b.name).sort()).toEqual([`${tag} torch 1000 brass`, `${tag} torch 100% brass`].sort());
+    const percent = await byName(`${tag} torch 100%`);
+    expect(percent.map((b) => b.name)).toEqual([`${tag} torch 100% brass`]);
+    expect(percent[0].lineCount).toBe(1);
+    expect(await byName(`${tag}_torch`)).toEqual([]);
+  });
+
   it('lines left out are counted and named, never costed at zero silently', async () => {
     const bom = await newBom();
     const orphan = await makePart(ws.agents.owner, { internalPn: `NOQ-${Date.now()}` });

@@ -112,8 +112,9 @@ export const bomRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/lines', access: 'boms.read', tag: 'Lines',
     summary: 'The lines of a BOM in order.', params: idParams,
     handler: async ({ auth, params, deps }) => {
-      // The BOM is read beside its lines only for the 404 of a missing one.
-      const [, lines] = await Promise.all([getBom(deps.db, auth.workspaceId, params.id), linesOf(deps.db, auth.workspaceId, params.id)]);
+      const lines = await linesOf(deps.db, auth.workspaceId, params.id);
+      // The BOM is read only to tell an empty BOM from a missing one (404).
+      if (lines.length === 0) await getBom(deps.db, auth.workspaceId, params.id);
       return { items: lines.map(lineView), nextCursor: null };
     },
   }),

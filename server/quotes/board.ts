@@ -1,10 +1,9 @@
 import type { Deps } from '../deps';
 import { errors } from '../http/errors';
-import { getOrNotFound } from '../db/versioned';
-import { scoped } from '../db/scope';
-import { quoteBoard, CostingInputError, type Quote } from '../costing';
+import type { DbOrTrx } from '../db/knex';
+import { quoteBoard, CostingInputError, type FxRate, type Quote } from '../costing';
 import { loadQuotes, today } from './repository';
-import { ratesAsOf, pivotOf } from '../fx/repository';
+import { RATES_AS_OF_SQL } from '../fx/repository';
 import { getProfile, firstProfile } from '../profiles/repository';
 
 export interface BoardQuery {
@@ -21,16 +20,14 @@ export interface BoardQuery {
  */
 export async function offersForPart(deps: Deps, workspaceId: string, partId: string, query: BoardQuery) {
   const date = query.date ?? today();
-  // Every read side by side: under load each sequential round trip waits its turn.
-  const [part, profile, quotes, suppliers, fxRates, pivot] = await Promise.all([
-    getOrNotFound<{ id: string; hsCode: string | null }>(deps.db, 'parts', workspaceId, partId, 'part'),
+  // Three reads side by side: under load each round trip waits its turn.
+  const [context, profile, quotes] = await Promise.all([
+    boardContext(deps.db, workspaceId, partId, date),
     query.profileId ? getProfile(deps.db, workspaceId, query.profileId) : firstProfile(deps.db, workspaceId),
     loadQuotes(deps.db, workspaceId, { partIds: [partId] }),
-    // All the workspace's suppliers (tens, not thousands): no wait for the quotes first.
-    scoped(deps.db, 'suppliers', workspaceId).select('id', 'active', 'name') as Promise<{ id: string; active: boolean; name: string }[]>,
-    ratesAsOf(deps.db, workspaceId, date),
-    pivotOf(deps.db, workspaceId),
   ]);
+  if (!context) throw errors.notFound('part');
+  const { part, suppliers, fxRates, pivot } = context;
   if (query.profileId && !profile) throw errors.validation('No such landed-cost profile in this workspace.', [{ path: 'profileId', message: 'refers to a missing profile' }]);
   const currency = query.currency ?? profile?.currency ?? 'USD';
   try {
@@ -49,4 +46,21 @@ export async function offersForPart(deps: Deps, workspaceId: string, partId: str
     if (err instanceof CostingInputError) throw errors.validation(err.message);
     throw err;
   }
+}
+
+/**
+ * The part, with what every offer on it needs from its workspace, in one statement: the
+ * pivot currency, all the suppliers (tens, not thousands) and the FX rates as of `date`.
+ */
+async function boardContext(db: DbOrTrx, workspaceId: string, partId: string, date: string) {
+  const { rows } = (await db.raw(
+    `SELECT p.id, p.hs_code AS "hsCode", coalesce(w.pivot_currency, 'EUR') AS pivot,
+            (SELECT coalesce(json_agg(json_build_object('id', s.id::text, 'active', s.active, 'name', s.name)), '[]') FROM suppliers s WHERE s.workspace_id = p.workspace_id) AS suppliers,
+            (SELECT coalesce(json_agg(f), '[]') FROM (${RATES_AS_OF_SQL}) f) AS "fxRates"
+       FROM parts p JOIN workspaces w ON w.id = p.workspace_id
+      WHERE p.workspace_id = ? AND p.id = ?`,
+    [workspaceId, date, workspaceId, partId],
+  )) as { rows: { id: string; hsCode: string | null; pivot: string; suppliers: { id: string; active: boolean; name: string }[]; fxRates: (FxRate & { id: string })[] }[] };
+  const row = rows[0];
+  return row && { part: { id: row.id, hsCode: row.hsCode }, pivot: row.pivot, suppliers: row.suppliers, fxRates: row.fxRates };
 }

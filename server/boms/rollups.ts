@@ -175,16 +175,14 @@ type StoredText = { epoch: string; costingDate: string; qty: number; complete: b
  */
 async function readPlanned(db: DbOrTrx, workspaceId: string, bomId: string, part: { text: string; gzip?: 'result_gzip' | 'check_gzip'; waivers?: boolean }) {
   const waived = part.waivers ? 'EXISTS (SELECT 1 FROM stress_waivers sw WHERE sw.workspace_id = b.workspace_id AND sw.bom_id = b.id)' : 'false';
-  // A result stored before `lineWarningCount` existed, or before the gzip was kept, is
-  // computed again. (A stored gzip implies the former: it is checked without reading the
-  // whole result.)
+  // A roll-up stored before the gzip was kept (or `lineWarningCount`) is computed again:
+  // one with a gzip has both, and saying so opens no stored answer.
   const answer = part.gzip
-    ? `CASE WHEN ${waived} THEN ${part.text} END AS "storedText", CASE WHEN NOT ${waived} THEN r.${part.gzip} END AS "storedGzip",
-       CASE WHEN ${waived} THEN jsonb_exists(r.result, 'lineWarningCount') ELSE r.${part.gzip} IS NOT NULL END AS "storedComplete"`
-    : `${part.text} AS "storedText", jsonb_exists(r.result, 'lineWarningCount') AS "storedComplete"`;
+    ? `CASE WHEN ${waived} THEN ${part.text} END AS "storedText", CASE WHEN NOT ${waived} THEN r.${part.gzip} END AS "storedGzip"`
+    : `${part.text} AS "storedText"`;
   const { rows } = (await db.raw(
     `SELECT b.*, w.costing_epoch AS "workspaceEpoch", r.epoch AS "storedEpoch", to_char(r.costing_date, 'YYYY-MM-DD') AS "storedDate", r.qty AS "storedQty",
-            ${waived} AS "waived", ${answer}
+            r.result_gzip IS NOT NULL AS "storedComplete", ${waived} AS "waived", ${answer}
        FROM boms b JOIN workspaces w ON w.id = b.workspace_id
        LEFT JOIN cost_rollups r ON r.bom_id = b.id AND r.workspace_id = b.workspace_id
       WHERE b.workspace_id = ? AND b.id = ?`,
@@ -231,14 +229,18 @@ export async function plannedTotals(deps: Deps, workspaceId: string, bomId: stri
 
 /**
  * The stress check: the one stored with a fresh roll-up, with the waivers read now (sent
- * as stored when the BOM has none), else checked now and a refresh queued.
+ * as stored when the BOM has none); else the roll-up is computed and stored first.
  */
 export async function plannedStress(deps: Deps, workspaceId: string, bomId: string, gzipOk = false): Promise<StressCheckView | RawJson> {
   const { bom, epoch, stored, waived } = await readPlanned(deps.db, workspaceId, bomId, { text: `(r.stress -> 'check')::text`, gzip: gzipOk ? 'check_gzip' : undefined, waivers: true });
   const fresh = freshAnswer(stored, epoch, bom);
   if (fresh && fresh.text !== 'null') return waived ? withWaivers(deps.db, workspaceId, JSON.parse(fresh.text) as StressCheckView) : fresh;
-  if (!stored || !isFresh(stored, epoch, bom)) await queueRefresh(deps, workspaceId);
-  return stressOf(deps.db, workspaceId, bom);
+  // Stored as null: the workspace has no stress policy (stressOf says so, 409).
+  if (fresh || (stored?.complete && isFresh(stored, epoch, bom))) return stressOf(deps.db, workspaceId, bom);
+  // Stale or never stored: the roll-up is computed once for all who ask meanwhile, and stored.
+  const { stress } = await computeRollup(deps.db, workspaceId, bom, epoch);
+  if (!stress.check) return stressOf(deps.db, workspaceId, bom);
+  return waived ? withWaivers(deps.db, workspaceId, structuredClone(stress.check)) : stress.check;
 }
 
 const gzipText = async (text: string): Promise<Buffer> => promisify(gzip)(text);

@@ -77,6 +77,31 @@ describe('the stress check', () => {
     expect((await db('cost_rollups').where({ bomId: id }).first(db.raw(`stress -> 'check' -> 'summary' AS summary`))).summary).toEqual(live.summary);
   });
 
+  it('readers of the stress check with no roll-up stored get the check and the roll-up is stored; without a policy the answer is a clear 409', async () => {
+    const d = ws.agents.designer;
+    const db = t.database.db;
+    const id = (await d.post('/api/boms').send({ name: 'Ioniser cold start', reportingCurrency: 'USD', plannedQty: 1000, ambientC: '25' }).expect(201)).body.id;
+    await d.post(`/api/boms/${id}/lines`).send({ refDes: 'R1', partId: hvChip.id, qtyPerUnit: '1', operatingPoint: { voltageV: '100V' } }).expect(201);
+    await db('cost_rollups').where({ bomId: id }).delete();
+    // Five readers at once with nothing stored: all get the check, and the roll-up is stored.
+    const answers = await Promise.all(Array.from({ length: 5 }, () => ws.agents.viewer.get(`/api/boms/${id}/stress`).expect(200)));
+    for (const a of answers) expect(a.body.lines[0]).toMatchObject({ refDes: 'R1', status: 'clear' });
+    const stored = await db('cost_rollups').where({ bomId: id }).first('computedAt', db.raw(`stress_tally AS tally`));
+    expect(stored.tally).toEqual(answers[0].body.summary);
+    // In a workspace without any stress policy: 409 saying so, and its fresh roll-up is not computed again.
+    const bare = await workspaceWithEveryRole(t, 'No policy Co');
+    await db('workspaces').where({ id: bare.workspaceId }).update({ defaultStressPolicyId: null });
+    await db('stress_policies').where({ workspaceId: bare.workspaceId }).delete();
+    const plain = (await bare.agents.designer.post('/api/boms').send({ name: 'Night light', reportingCurrency: 'USD', plannedQty: 1000 }).expect(201)).body.id;
+    await bare.agents.viewer.get(`/api/boms/${plain}/cost`).expect(200);
+    const noPolicy = await db('cost_rollups').where({ bomId: plain }).first('computedAt', db.raw(`stress -> 'check' AS "check"`));
+    expect(noPolicy.check).toBeNull();
+    const refused = await bare.agents.viewer.get(`/api/boms/${plain}/stress`).expect(409);
+    expect(refused.body.error.message).toMatch(/no stress policy/);
+    await bare.agents.viewer.get(`/api/boms/${plain}/stress`).expect(409);
+    expect((await db('cost_rollups').where({ bomId: plain }).first('computedAt')).computedAt).toEqual(noPolicy.computedAt);
+  });
+
   it('blocks release over the absolute rating; beyond policy needs a written waiver, kept in the audit log', async () => {
     const d = ws.agents.designer;
     const chip = (await d.get(`/api/boms/${bomId}/lines`)).body.items.find((l: { id: string }) => l.id === chipLine.id);

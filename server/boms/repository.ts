@@ -106,27 +106,6 @@ const LINE_COLUMNS: (keyof LineRow)[] = [
   'unitCost', 'oneTimeCost', 'currency', 'opVoltageV', 'opCurrentA', 'opPowerW', 'opAmbientC', 'unresolved', 'version',
 ];
 
-/**
- * A BOM's lines in order as the API's JSON array, written by PostgreSQL: the lines list of
- * a large BOM is sent as this text, with no rows to parse and no objects to write out in
- * Node (most of the work of the busiest read). The fields are `lineView`'s, and a test
- * holds the two equal.
- */
-export async function linesJsonOf(db: DbOrTrx, workspaceId: string, bomId: string): Promise<{ json: string; count: number }> {
-  const { rows } = (await db.raw(
-    `SELECT coalesce(json_agg(json_build_object(
-              'id', l.id::text, 'bomId', l.bom_id::text, 'position', l.position, 'kind', l.kind, 'refDes', l.ref_des, 'partId', l.part_id::text,
-              'qtyPerUnit', trim_scale(l.qty_per_unit)::text, 'attritionPct', trim_scale(l.attrition_pct)::text, 'pinnedQuoteId', l.pinned_quote_id::text,
-              'dnp', l.dnp, 'note', l.note, 'unitCost', l.unit_cost::text, 'oneTimeCost', l.one_time_cost::text, 'currency', l.currency,
-              'operatingPoint', json_build_object('voltageV', l.op_voltage_v, 'currentA', l.op_current_a, 'powerW', l.op_power_w, 'ambientC', l.op_ambient_c),
-              'unresolved', l.unresolved, 'version', l.version) ORDER BY l.position, l.id)::text, '[]') AS json,
-            count(*)::int AS count
-       FROM bom_lines l WHERE l.workspace_id = ? AND l.bom_id = ?`,
-    [workspaceId, bomId],
-  )) as { rows: { json: string; count: number }[] };
-  return rows[0];
-}
-
 /** A BOM's lines in order; the row timestamps are left out (parsing them was a third of reading 1,000 lines). */
 export function linesOf(db: DbOrTrx, workspaceId: string, bomId: string): Promise<LineRow[]> {
   return scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }]).select(camelColumns(db, LINE_COLUMNS)) as unknown as Promise<LineRow[]>;

@@ -8,8 +8,7 @@ import {
 import { scoped } from '../db/scope';
 import { updateOrConflict } from '../db/versioned';
 import { audit } from '../audit/repository';
-import { bomView, editableBom, getBom, lineView, linesJsonOf, type BomRow } from './repository';
-import { RawJson } from '../http/raw-json';
+import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
 import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
 import { rollupsFor, bomsWithRollups, plannedCost, plannedTotals, takesGzip } from './rollups';
@@ -113,10 +112,10 @@ export const bomRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/lines', access: 'boms.read', tag: 'Lines',
     summary: 'The lines of a BOM in order.', params: idParams,
     handler: async ({ auth, params, deps }) => {
-      const lines = await linesJsonOf(deps.db, auth.workspaceId, params.id);
+      const lines = await linesOf(deps.db, auth.workspaceId, params.id);
       // The BOM is read only to tell an empty BOM from a missing one (404).
-      if (lines.count === 0) await getBom(deps.db, auth.workspaceId, params.id);
-      return new RawJson(`{"items":${lines.json},"nextCursor":null}`);
+      if (lines.length === 0) await getBom(deps.db, auth.workspaceId, params.id);
+      return { items: lines.map(lineView), nextCursor: null };
     },
   }),
   route({

@@ -75,7 +75,19 @@ async function main() {
     let nextLine = 0;
     const routes: { name: string; share: number; opts: Partial<autocannon.Options> }[] = [
       { name: 'GET /api/boms', share: 10, opts: { url: `${base}/api/boms` } },
-      { name: 'GET /api/boms/:id/lines', share: 9, opts: { url: `${base}/api/boms/${bomId}/lines` } },
+      {
+        // As the grid reads them: page after page (500 lines each), then from the start again.
+        name: 'GET /api/boms/:id/lines', share: 9,
+        opts: {
+          requests: [{
+            method: 'GET',
+            setupRequest: (req: Record<string, unknown>, context: Record<string, unknown>) => ({ ...req, path: `/api/boms/${bomId}/lines${context.cursor ? `?cursor=${context.cursor as string}` : ''}` }),
+            onResponse: (status: number, body: string, context: Record<string, unknown>) => {
+              context.cursor = status === 200 ? /"nextCursor":"([^"]+)"\}$/.exec(body.slice(-80))?.[1] : undefined;
+            },
+          }] as unknown as autocannon.Request[],
+        },
+      },
       { name: 'GET /api/boms/:id/cost', share: 9, opts: { url: `${base}/api/boms/${bomId}/cost` } },
       { name: 'GET /api/boms/:id/stress', share: 9, opts: { url: `${base}/api/boms/${bomId}/stress` } },
       { name: 'GET /api/parts/:id/offers', share: 8, opts: { url: `${base}/api/parts/${boardPart}/offers?qty=10000` } },

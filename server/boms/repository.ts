@@ -110,3 +110,20 @@ const LINE_COLUMNS: (keyof LineRow)[] = [
 export function linesOf(db: DbOrTrx, workspaceId: string, bomId: string): Promise<LineRow[]> {
   return scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }]).select(camelColumns(db, LINE_COLUMNS)) as unknown as Promise<LineRow[]>;
 }
+
+/**
+ * One page of a BOM's lines in order, after the line a cursor names ("position.id"; ids
+ * break ties of position), and the cursor of the next page (null on the last).
+ */
+export async function linesPage(db: DbOrTrx, workspaceId: string, bomId: string, limit: number, cursor?: string): Promise<{ lines: LineRow[]; nextCursor: string | null }> {
+  const q = scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }]).select(camelColumns(db, LINE_COLUMNS)).limit(limit + 1);
+  if (cursor) {
+    const [position, id] = cursor.split('.');
+    q.andWhereRaw('(position, id) > (?::int, ?::bigint)', [position, id]);
+  }
+  const rows = (await q) as unknown as LineRow[];
+  const more = rows.length > limit;
+  const lines = more ? rows.slice(0, limit) : rows;
+  const last = lines[lines.length - 1];
+  return { lines, nextCursor: more ? `${last.position}.${last.id}` : null };
+}

@@ -3,12 +3,12 @@ import { route, type RouteDef } from '../http/route';
 import { errors } from '../http/errors';
 import { idParams } from '../../src/shared/schemas/common';
 import {
-  bomCreateBody, bomPatchBody, stateBody, lineCreateBody, linePatchBody, bulkBody, lineParams, costQuery, curveQuery,
+  bomCreateBody, bomPatchBody, stateBody, lineCreateBody, linePatchBody, bulkBody, lineParams, lineListQuery, costQuery, curveQuery,
 } from '../../src/shared/schemas/boms';
 import { scoped } from '../db/scope';
 import { updateOrConflict } from '../db/versioned';
 import { audit } from '../audit/repository';
-import { bomView, editableBom, getBom, lineView, linesOf, type BomRow } from './repository';
+import { bomView, editableBom, getBom, lineView, linesPage, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
 import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
 import { rollupsFor, bomsWithRollups, plannedCost, plannedTotals, takesGzip } from './rollups';
@@ -110,12 +110,12 @@ export const bomRoutes: RouteDef[] = [
 
   route({
     method: 'get', path: '/api/boms/:id/lines', access: 'boms.read', tag: 'Lines',
-    summary: 'The lines of a BOM in order.', params: idParams,
-    handler: async ({ auth, params, deps }) => {
-      const lines = await linesOf(deps.db, auth.workspaceId, params.id);
+    summary: 'The lines of a BOM in order, 500 a page (`limit` up to 5,000); `nextCursor` asks for the next page.', params: idParams, query: lineListQuery,
+    handler: async ({ auth, params, query, deps }) => {
+      const page = await linesPage(deps.db, auth.workspaceId, params.id, query.limit, query.cursor);
       // The BOM is read only to tell an empty BOM from a missing one (404).
-      if (lines.length === 0) await getBom(deps.db, auth.workspaceId, params.id);
-      return { items: lines.map(lineView), nextCursor: null };
+      if (page.lines.length === 0) await getBom(deps.db, auth.workspaceId, params.id);
+      return { items: page.lines.map(lineView), nextCursor: page.nextCursor };
     },
   }),
   route({

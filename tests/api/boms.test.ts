@@ -119,6 +119,29 @@ describe('BOMs, lines and the cost roll', () => {
     expect(await lineOf(limited.id)).toMatchObject({ quoteId: quick.id, orderQty: 1000, goodsValue: '4.000000' });
   });
 
+  it('the lines list pages in position order (ties by id); the pages together are the whole list, once each', async () => {
+    const bom = await newBom();
+    // Positions with ties and gaps: 0, 5, 5, 5, 9, 12, 12.
+    const positions = [5, 0, 12, 5, 9, 5, 12];
+    await ws.agents.designer.post(`/api/boms/${bom.id}/lines/bulk`).send({ create: positions.map((position, i) => ({ position, refDes: `R${i + 1}`, partId: partA.id, qtyPerUnit: '1' })) }).expect(200);
+    const whole = (await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).expect(200)).body;
+    expect(whole.nextCursor).toBeNull();
+    expect(whole.items.map((l: { position: number }) => l.position)).toEqual([0, 5, 5, 5, 9, 12, 12]);
+    const pages: { items: { id: string }[]; nextCursor: string | null }[] = [];
+    let cursor: string | undefined;
+    do {
+      const page = (await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ limit: 3, ...(cursor ? { cursor } : {}) }).expect(200)).body;
+      pages.push(page);
+      cursor = page.nextCursor ?? undefined;
+    } while (cursor);
+    expect(pages.map((p) => p.items.length)).toEqual([3, 3, 1]);
+    expect(pages.flatMap((p) => p.items)).toEqual(whole.items);
+    // A cursor is the API's own: anything else is a 400 that names the field.
+    const bad = await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ cursor: "5' OR 1=1" }).expect(400);
+    expect(bad.body.error.details[0].path).toBe('cursor');
+    await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ limit: 0 }).expect(400);
+  });
+
   it('bulk edits apply in one transaction: one stale version and nothing changes', async () => {
     const bom = await newBom();
     const d = ws.agents.designer;

@@ -161,3 +161,12 @@ export const compareQuery = z.strictObject({
   right: z.string().regex(/^(snapshot|bom):[1-9]\d{0,17}$/, 'must be snapshot:<id> or bom:<id>'),
   qty: z.coerce.number().int().min(1).max(100_000_000).optional(),
 });
+
+/**
+ * The lines list, a page at a time in position order (keyset paging): `cursor` is the
+ * `nextCursor` of the page before, opaque to clients. 500 lines a page unless asked.
+ */
+export const lineListQuery = z.strictObject({
+  limit: z.coerce.number().int().min(1).max(5000).default(500),
+  cursor: z.string().regex(/^[0-9]{1,10}\.[1-9][0-9]{0,17}$/, 'must be a nextCursor from the page before').optional(),
+});

@@ -3,7 +3,7 @@
  * 1,000-line BOM, driven on loopback by autocannon at 50 connections for a bounded time:
  * signed-in reads (BOM list, lines, cost roll, stress check, quote board) and writes (line
  * edits). Two consecutive runs; prints throughput, p50/p99 per route, errors and the
- * server's memory 3 s after each run, as JSON (also written to .data/bench-load.json).
+ * server's memory 10 s after each run, as JSON (also written to .data/bench-load.json).
  * Targets: 0 errors, p99 under 250 ms for reads, no memory growth between the runs.
  */
 import { spawn } from 'node:child_process';
@@ -125,9 +125,9 @@ async function main() {
           })),
         ),
       );
-      // The memory after the load has settled (V8 collects when the server goes idle), so two
+      // The memory after the load has settled (V8 shrinks the heap some seconds after the server goes idle), so two
       // runs compare like with like rather than wherever a collection happened to stand.
-      await new Promise((r) => setTimeout(r, 3000));
+      await new Promise((r) => setTimeout(r, 10_000));
       const summary = {
         run, seconds, connections, totalRequests: outs.reduce((n, o) => n + o.requests, 0),
         throughputPerSec: outs.reduce((n, o) => n + o.throughputPerSec, 0), errors: outs.reduce((n, o) => n + o.errors, 0),

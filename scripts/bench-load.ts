@@ -125,8 +125,9 @@ async function main() {
           })),
         ),
       );
-      // The memory after the load has settled (V8 shrinks the heap some seconds after the server goes idle), so two
-      // runs compare like with like rather than wherever a collection happened to stand.
+      // The memory after the load has settled (V8 shrinks the heap some seconds after the
+      // server goes idle), so two runs compare like with like rather than wherever a
+      // collection happened to stand.
       await new Promise((r) => setTimeout(r, 10_000));
       const summary = {
         run, seconds, connections, totalRequests: outs.reduce((n, o) => n + o.requests, 0),

@@ -1,8 +1,5 @@
-import { promisify } from 'node:util';
-import { gzip } from 'node:zlib';
 import type { Knex } from 'knex';
 import type { DbOrTrx } from '../db/knex';
-import type { Request } from 'express';
 import type { Deps } from '../deps';
 import { scoped } from '../db/scope';
 import { today } from '../quotes/repository';
@@ -10,6 +7,7 @@ import { costOf, costTotalsOf, type CostView } from './cost';
 import { getBom, type BomRow } from './repository';
 import { releaseGuards } from './release-guards';
 import { RawJson } from '../http/raw-json';
+import { compressBoth, type Encoding } from '../http/encoding';
 import { stressOf, withWaivers, type StressCheckView } from '../stress/service';
 import { errors } from '../http/errors';
 
@@ -80,13 +78,13 @@ async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch
     const resultText = JSON.stringify(cost);
     const checkText = JSON.stringify(check);
     // Compressed once here (on libuv's threads), not on every read.
-    const [resultGzip, checkGzip] = await Promise.all([gzipText(resultText), check ? gzipText(checkText) : null]);
+    const [result, checked] = await Promise.all([compressBoth(resultText), check ? compressBoth(checkText) : null]);
     const row = {
       bomId: bom.id, workspaceId, epoch: e, costingDate: cost.date, qty: bom.plannedQty, currency: bom.reportingCurrency,
       landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
       warnings: cost.warnings.length + cost.lineWarningCount,
       totals: JSON.stringify(cost.totals), result: resultText, stress: `{"tally":${JSON.stringify(stress.tally)},"check":${checkText}}`, stressTally: JSON.stringify(stress.tally),
-      resultGzip, checkGzip, computedAt: db.fn.now(),
+      resultGzip: result.gzip, resultBr: result.br, checkGzip: checked?.gzip ?? null, checkBr: checked?.br ?? null, computedAt: db.fn.now(),
     };
     await db('cost_rollups').insert(row).onConflict('bom_id').merge();
     return { cost, stress };
@@ -102,15 +100,16 @@ async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch
 /**
  * The BOM list's read in one statement: the workspace's BOMs (optionally by name), each
  * with its line count and stored roll-up (no results: what the list shows), and the
- * costing epoch. A roll-up without a gzip was stored before the stress check was kept
- * with it (its `hasStress` is false: it is computed again).
+ * costing epoch. A roll-up without its brotli form was stored by older code (before the
+ * stress check and the compressed forms were kept with it): its `hasStress` is false, and
+ * it is computed again.
  */
 export async function bomsWithRollups(db: DbOrTrx, workspaceId: string, nameLike?: string) {
   const { rows } = (await db.raw(
     `SELECT b.*, (SELECT count(*) FROM bom_lines l WHERE l.workspace_id = b.workspace_id AND l.bom_id = b.id)::int AS "lineCount",
             w.costing_epoch AS "workspaceEpoch", r.epoch AS "rEpoch", to_char(r.costing_date, 'YYYY-MM-DD') AS "rCostingDate", r.qty AS "rQty",
             r.currency AS "rCurrency", r.landed_per_unit AS "rLandedPerUnit", r.target_unit_cost AS "rTargetUnitCost", r.left_out AS "rLeftOut",
-            r.warnings AS "rWarnings", r.stress_tally AS "rStressTally", r.result_gzip IS NOT NULL AS "rHasStress"
+            r.warnings AS "rWarnings", r.stress_tally AS "rStressTally", ${STORED_COMPLETE} AS "rHasStress"
        FROM boms b JOIN workspaces w ON w.id = b.workspace_id
        LEFT JOIN cost_rollups r ON r.bom_id = b.id AND r.workspace_id = b.workspace_id
       WHERE b.workspace_id = ? ${nameLike === undefined ? '' : 'AND b.name ILIKE ?'}
@@ -165,53 +164,54 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   return out;
 }
 
-type StoredText = { epoch: string; costingDate: string; qty: number; complete: boolean; text?: string | null; gzip?: Buffer | null };
+/**
+ * A roll-up stored by this code: the brotli form is the last thing added to it, so a row
+ * with it has every field (saying so opens no stored answer).
+ */
+const STORED_COMPLETE = 'r.result_br IS NOT NULL';
+
+type StoredText = { epoch: string; costingDate: string; qty: number; complete: boolean; text?: string | null; bytes?: Buffer | null };
 
 /**
  * The BOM, its workspace's costing epoch and one stored part of its roll-up, in one
- * statement (one round trip under load, not three, and one snapshot): `gzip` when the
- * client takes gzip, else `text`. With `waivers`, whether the BOM has any; then the
- * stored check comes as text (the waivers are added to it).
+ * statement (one round trip under load, not three, and one snapshot): compressed when the
+ * client takes an encoding, else as text. With `waivers`, whether the BOM has any; then
+ * the stored check comes as text (the waivers are added to it).
  */
-async function readPlanned(db: DbOrTrx, workspaceId: string, bomId: string, part: { text: string; gzip?: 'result_gzip' | 'check_gzip'; waivers?: boolean }) {
+async function readPlanned(db: DbOrTrx, workspaceId: string, bomId: string, part: { text: string; compressed?: string; waivers?: boolean }) {
   const waived = part.waivers ? 'EXISTS (SELECT 1 FROM stress_waivers sw WHERE sw.workspace_id = b.workspace_id AND sw.bom_id = b.id)' : 'false';
-  // A roll-up stored before the gzip was kept (or `lineWarningCount`) is computed again:
-  // one with a gzip has both, and saying so opens no stored answer.
-  const answer = part.gzip
-    ? `CASE WHEN ${waived} THEN ${part.text} END AS "storedText", CASE WHEN NOT ${waived} THEN r.${part.gzip} END AS "storedGzip"`
+  const answer = part.compressed
+    ? `CASE WHEN ${waived} THEN ${part.text} END AS "storedText", CASE WHEN NOT ${waived} THEN r.${part.compressed} END AS "storedBytes"`
     : `${part.text} AS "storedText"`;
   const { rows } = (await db.raw(
     `SELECT b.*, w.costing_epoch AS "workspaceEpoch", r.epoch AS "storedEpoch", to_char(r.costing_date, 'YYYY-MM-DD') AS "storedDate", r.qty AS "storedQty",
-            r.result_gzip IS NOT NULL AS "storedComplete", ${waived} AS "waived", ${answer}
+            ${STORED_COMPLETE} AS "storedComplete", ${waived} AS "waived", ${answer}
        FROM boms b JOIN workspaces w ON w.id = b.workspace_id
        LEFT JOIN cost_rollups r ON r.bom_id = b.id AND r.workspace_id = b.workspace_id
       WHERE b.workspace_id = ? AND b.id = ?`,
     [workspaceId, bomId],
   )) as { rows: Record<string, unknown>[] };
   if (!rows[0]) throw errors.notFound('BOM');
-  const { workspaceEpoch, storedEpoch, storedDate, storedQty, storedComplete, storedText, storedGzip, waived: hasWaiver, ...bom } = rows[0];
+  const { workspaceEpoch, storedEpoch, storedDate, storedQty, storedComplete, storedText, storedBytes, waived: hasWaiver, ...bom } = rows[0];
   const stored: StoredText | undefined = storedEpoch === null
     ? undefined
-    : { epoch: String(storedEpoch), costingDate: storedDate as string, qty: storedQty as number, complete: Boolean(storedComplete), text: storedText as string | null, gzip: storedGzip as Buffer | null };
+    : { epoch: String(storedEpoch), costingDate: storedDate as string, qty: storedQty as number, complete: Boolean(storedComplete), text: storedText as string | null, bytes: storedBytes as Buffer | null };
   return { bom: bom as unknown as BomRow, epoch: String(workspaceEpoch ?? 0), stored, waived: Boolean(hasWaiver) };
 }
 
-function freshAnswer(s: StoredText | undefined, epoch: string, bom: BomRow): RawJson | null {
+function freshAnswer(s: StoredText | undefined, epoch: string, bom: BomRow, encoding: Encoding | null = null): RawJson | null {
   if (!s?.complete || !isFresh(s, epoch, bom)) return null;
-  if (s.gzip) return new RawJson('', s.gzip);
+  if (s.bytes && encoding) return new RawJson('', { encoding, bytes: s.bytes });
   return s.text ? new RawJson(s.text) : null;
 }
 
-/** Whether a request takes a gzip answer (every browser says so; no header means no). */
-export const takesGzip = (req: Request) => Boolean(req.headers['accept-encoding']) && req.acceptsEncodings('gzip', 'identity') === 'gzip';
-
 /**
  * The cost roll at the planned quantity today: the stored one when fresh (sent as it is
- * stored, compressed or as text), else computed and stored.
+ * stored, in the encoding the client takes or as text), else computed and stored.
  */
-export async function plannedCost(deps: Deps, workspaceId: string, bomId: string, gzipOk = false): Promise<CostView | RawJson> {
-  const { bom, epoch, stored } = await readPlanned(deps.db, workspaceId, bomId, { text: 'r.result::text', gzip: gzipOk ? 'result_gzip' : undefined });
-  return freshAnswer(stored, epoch, bom) ?? refreshRollup(deps.db, workspaceId, bom, epoch);
+export async function plannedCost(deps: Deps, workspaceId: string, bomId: string, encoding: Encoding | null = null): Promise<CostView | RawJson> {
+  const { bom, epoch, stored } = await readPlanned(deps.db, workspaceId, bomId, { text: 'r.result::text', compressed: encoding ? `result_${encoding}` : undefined });
+  return freshAnswer(stored, epoch, bom, encoding) ?? refreshRollup(deps.db, workspaceId, bom, epoch);
 }
 
 /**
@@ -231,9 +231,9 @@ export async function plannedTotals(deps: Deps, workspaceId: string, bomId: stri
  * The stress check: the one stored with a fresh roll-up, with the waivers read now (sent
  * as stored when the BOM has none); else the roll-up is computed and stored first.
  */
-export async function plannedStress(deps: Deps, workspaceId: string, bomId: string, gzipOk = false): Promise<StressCheckView | RawJson> {
-  const { bom, epoch, stored, waived } = await readPlanned(deps.db, workspaceId, bomId, { text: `(r.stress -> 'check')::text`, gzip: gzipOk ? 'check_gzip' : undefined, waivers: true });
-  const fresh = freshAnswer(stored, epoch, bom);
+export async function plannedStress(deps: Deps, workspaceId: string, bomId: string, encoding: Encoding | null = null): Promise<StressCheckView | RawJson> {
+  const { bom, epoch, stored, waived } = await readPlanned(deps.db, workspaceId, bomId, { text: `(r.stress -> 'check')::text`, compressed: encoding ? `check_${encoding}` : undefined, waivers: true });
+  const fresh = freshAnswer(stored, epoch, bom, encoding);
   if (fresh && fresh.text !== 'null') return waived ? withWaivers(deps.db, workspaceId, JSON.parse(fresh.text) as StressCheckView) : fresh;
   // Stored as null: the workspace has no stress policy (stressOf says so, 409).
   if (fresh || (stored?.complete && isFresh(stored, epoch, bom))) return stressOf(deps.db, workspaceId, bom);
@@ -242,8 +242,6 @@ export async function plannedStress(deps: Deps, workspaceId: string, bomId: stri
   if (!stress.check) return stressOf(deps.db, workspaceId, bom);
   return waived ? withWaivers(deps.db, workspaceId, structuredClone(stress.check)) : stress.check;
 }
-
-const gzipText = async (text: string): Promise<Buffer> => promisify(gzip)(text);
 
 /** Queues one refresh of a workspace's stale roll-ups (at most one waiting per workspace). */
 export async function queueRefresh(deps: Deps, workspaceId: string): Promise<void> {
@@ -257,12 +255,12 @@ export async function refreshWorkspace(deps: Deps, workspaceId: string): Promise
   const boms = (await scoped(deps.db, 'boms', workspaceId)) as BomRow[];
   const stored = (await scoped(deps.db, 'cost_rollups', workspaceId)
     // Read without opening the stored answers (large ones take long to decompress).
-    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`result_gzip IS NOT NULL AS has_stress`))) as RollupRow[];
+    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`${STORED_COMPLETE.replace('r.', '')} AS has_stress`))) as RollupRow[];
   const byBom = new Map(stored.map((r) => [r.bomId, r]));
   let n = 0;
   for (const bom of boms) {
     const r = byBom.get(bom.id);
-    // One stored before the stress check and the gzip were kept with it counts as stale.
+    // One stored by older code (without the stress check or the compressed forms) counts as stale.
     if (r?.hasStress && isFresh(r, epoch, bom)) continue;
     await refreshRollup(deps.db, workspaceId, bom, epoch);
     n++;

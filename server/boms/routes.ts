@@ -11,7 +11,8 @@ import { audit } from '../audit/repository';
 import { bomView, editableBom, getBom, lineView, linesPage, type BomRow } from './repository';
 import { createLines, updateLine, deleteLine, changeState, newRevision } from './service';
 import { costOf, costTotalsOf, curveOf, ladderOf } from './cost';
-import { rollupsFor, bomsWithRollups, plannedCost, plannedTotals, takesGzip } from './rollups';
+import { rollupsFor, bomsWithRollups, plannedCost, plannedTotals } from './rollups';
+import { acceptedEncoding } from '../http/encoding';
 import { releaseGuards } from './release-guards';
 import { today } from '../quotes/repository';
 import { importBom } from './import';
@@ -176,14 +177,14 @@ export const bomRoutes: RouteDef[] = [
     handler: async ({ req, auth, params, query, deps }) => {
       // The usual read (planned quantity, today) takes the BOM with its stored roll-up.
       if (query.qty === undefined && query.date === undefined) {
-        return query.view === 'totals' ? plannedTotals(deps, auth.workspaceId, params.id) : plannedCost(deps, auth.workspaceId, params.id, takesGzip(req));
+        return query.view === 'totals' ? plannedTotals(deps, auth.workspaceId, params.id) : plannedCost(deps, auth.workspaceId, params.id, acceptedEncoding(req));
       }
       const bom = await getBom(deps.db, auth.workspaceId, params.id);
       const planned = (query.qty === undefined || query.qty === bom.plannedQty) && (query.date === undefined || query.date === today());
       if (query.view === 'totals') {
         return planned ? plannedTotals(deps, auth.workspaceId, bom.id) : costTotalsOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
       }
-      return planned ? plannedCost(deps, auth.workspaceId, bom.id, takesGzip(req)) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
+      return planned ? plannedCost(deps, auth.workspaceId, bom.id, acceptedEncoding(req)) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
     },
   }),
   route({

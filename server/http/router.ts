@@ -42,8 +42,8 @@ export function buildRouter(routes: RouteDef[], deps: Deps, limiters: { auth: Mi
         if (auth && def.method !== 'get' && res.statusCode < 400) deps.afterWrite?.(auth.workspaceId);
         if (res.headersSent) return;
         if (result === undefined) res.status(def.status ?? 204).end();
-        else if (result instanceof RawJson && result.gzip) {
-          res.status(def.status ?? 200).type('application/json').set({ 'Content-Encoding': 'gzip', Vary: 'Accept-Encoding' }).send(result.gzip);
+        else if (result instanceof RawJson && result.compressed) {
+          res.status(def.status ?? 200).type('application/json').set({ 'Content-Encoding': result.compressed.encoding, Vary: 'Accept-Encoding' }).send(result.compressed.bytes);
         } else if (result instanceof RawJson) res.status(def.status ?? 200).type('application/json').send(result.text);
         else res.status(def.status ?? 200).json(result);
       } catch (err) {

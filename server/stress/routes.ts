@@ -7,7 +7,8 @@ import { scoped } from '../db/scope';
 import { updateOrConflict, getOrNotFound } from '../db/versioned';
 import { audit } from '../audit/repository';
 import { getBom } from '../boms/repository';
-import { plannedStress, takesGzip } from '../boms/rollups';
+import { plannedStress } from '../boms/rollups';
+import { acceptedEncoding } from '../http/encoding';
 import { CAUTION_TEXT } from '../derating';
 import { parseLimits, policyView, defaultPolicyId, type PolicyRow } from './policies';
 import { stressOf, lineOf } from './service';
@@ -67,7 +68,7 @@ export const stressRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/stress', access: 'boms.read', tag: 'Stress check',
     summary: "The stress check: every rated line's checks at its operating point under the BOM's policy (applied, rated, ratio, limit, status, formula), the line's worst status, a tally and the caution.",
     params: idParams,
-    handler: async ({ req, auth, params, deps }) => plannedStress(deps, auth.workspaceId, params.id, takesGzip(req)),
+    handler: async ({ req, auth, params, deps }) => plannedStress(deps, auth.workspaceId, params.id, acceptedEncoding(req)),
   }),
   route({
     method: 'post', path: '/api/boms/:id/lines/:lineId/waivers', access: 'boms.write', tag: 'Stress check', status: 201,

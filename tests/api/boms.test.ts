@@ -1,4 +1,4 @@
-import { gunzipSync } from 'node:zlib';
+import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startTestApp, signUp, type TestApp } from '../helpers/app';
 import { snapshot } from '../helpers/db';
@@ -264,18 +264,22 @@ describe('the stored roll-up', () => {
       .toMatchObject({ landedPerUnit: '0.0240000000', fresh: true });
   });
 
-  it('a fresh stored cost roll goes to a browser gzip-compressed as stored, and as JSON text to a client that does not ask', async () => {
+  it('a fresh stored cost roll goes compressed as stored (brotli, else gzip) and as JSON text to a client that asks for neither', async () => {
     const bom = await newBom({ plannedQty: 1000 });
     await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R1-R4', partId: partA.id, qtyPerUnit: '4' }).expect(201);
     const computed = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', 'gzip').expect(200);
-    const row = await t.database.db('cost_rollups').where({ bomId: bom.id }).first('resultGzip');
+    const row = await t.database.db('cost_rollups').where({ bomId: bom.id }).first('resultGzip', 'resultBr');
     expect(gunzipSync(row.resultGzip).toString('utf8')).toBe(JSON.stringify(computed.body));
-    const zipped = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', 'gzip, deflate, br').expect(200);
-    expect(zipped.headers['content-encoding']).toBe('gzip');
-    expect(zipped.headers.vary).toMatch(/Accept-Encoding/);
-    expect(zipped.body).toEqual(computed.body);
-    // No Accept-Encoding, or one without gzip: the stored JSON text.
-    for (const encoding of [undefined, 'identity', 'br;q=1, gzip;q=0']) {
+    expect(brotliDecompressSync(row.resultBr).toString('utf8')).toBe(JSON.stringify(computed.body));
+    // A browser offers both: brotli is sent. Offered gzip alone (or brotli refused), gzip.
+    for (const [offered, sent] of [['gzip, deflate, br, zstd', 'br'], ['gzip, deflate', 'gzip'], ['br;q=0, gzip', 'gzip'], ['br', 'br']]) {
+      const res = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', offered).expect(200);
+      expect(res.headers['content-encoding'], offered).toBe(sent);
+      expect(res.headers.vary).toMatch(/Accept-Encoding/);
+      expect(res.body).toEqual(computed.body);
+    }
+    // No Accept-Encoding, or one that takes neither: the stored JSON text.
+    for (const encoding of [undefined, 'identity', 'br;q=0, gzip;q=0']) {
       const req = ws.agents.viewer.get(`/api/boms/${bom.id}/cost`);
       if (encoding) req.set('Accept-Encoding', encoding);
       else req.unset('Accept-Encoding');

@@ -5,12 +5,14 @@ import { createDb } from './db/knex';
 import { createApp } from './app';
 
 /**
- * Starts the app: one stateless server process per core in production (WEB_CONCURRENCY
- * sets the number), sharing the port through node:cluster. Nothing lives in a process,
+ * Starts the app: one stateless server process per core in production, up to four
+ * (WEB_CONCURRENCY sets the number), sharing the port through node:cluster. Nothing lives in a process,
  * so any of them answers any request, as separate machines would.
  */
 const config = loadConfig();
-const processes = config.WEB_CONCURRENCY ?? (config.NODE_ENV === 'production' ? availableParallelism() : 1);
+// At most four by default: each process opens up to 19 PostgreSQL connections (pools of
+// 10 for queries, 5 for sessions, 4 for jobs), and PostgreSQL's own default is 100.
+const processes = config.WEB_CONCURRENCY ?? (config.NODE_ENV === 'production' ? Math.min(availableParallelism(), 4) : 1);
 
 if (processes > 1 && cluster.isPrimary) runPrimary(processes);
 else runServer();

@@ -112,18 +112,26 @@ export function linesOf(db: DbOrTrx, workspaceId: string, bomId: string): Promis
 }
 
 /**
- * One page of a BOM's lines in order, after the line a cursor names ("position.id"; ids
- * break ties of position), and the cursor of the next page (null on the last).
+ * One page of a BOM's lines in order, after the line a cursor names, and the cursor of the
+ * next page (null on the last). A cursor is "position.id.epoch": ids break ties of
+ * position, and the workspace's costing epoch (moved by every insert, delete or move of a
+ * line) tells when the lines changed between two pages; that answers 409, and the reader
+ * starts again, so the pages read together are one consistent list.
  */
 export async function linesPage(db: DbOrTrx, workspaceId: string, bomId: string, limit: number, cursor?: string): Promise<{ lines: LineRow[]; nextCursor: string | null }> {
-  const q = scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }]).select(camelColumns(db, LINE_COLUMNS)).limit(limit + 1);
-  if (cursor) {
-    const [position, id] = cursor.split('.');
-    q.andWhereRaw('(position, id) > (?::int, ?::bigint)', [position, id]);
+  const q = scoped(db, 'bom_lines', workspaceId).andWhere({ bomId }).orderBy([{ column: 'position' }, { column: 'id' }])
+    .select(camelColumns(db, LINE_COLUMNS), db.raw('(SELECT costing_epoch FROM workspaces WHERE id = ?) AS "listEpoch"', [workspaceId]))
+    .limit(limit + 1);
+  const [position, id, epoch] = cursor ? cursor.split('.') : [];
+  if (cursor) q.andWhereRaw('(position, id) > (?::int, ?::bigint)', [position, id]);
+  const rows = (await q) as unknown as (LineRow & { listEpoch: string })[];
+  // With no line after the cursor the epoch is read on its own (lines may have been deleted).
+  const now = rows.length > 0 ? rows[0].listEpoch : cursor ? (await db('workspaces').where({ id: workspaceId }).first('costingEpoch'))?.costingEpoch : undefined;
+  if (cursor && String(now) !== epoch) {
+    throw errors.conflict('The lines changed while they were read page by page: read them again from the first page.');
   }
-  const rows = (await q) as unknown as LineRow[];
   const more = rows.length > limit;
   const lines = more ? rows.slice(0, limit) : rows;
   const last = lines[lines.length - 1];
-  return { lines, nextCursor: more ? `${last.position}.${last.id}` : null };
+  return { lines, nextCursor: more ? `${last.position}.${last.id}.${last.listEpoch}` : null };
 }

@@ -21,6 +21,14 @@ export type StoredStress = { tally: StressCheck['summary'] | null; check: Stress
 
 export const ROLLUP_QUEUE = 'cost-rollup';
 
+/**
+ * A roll-up whose compressed answers and tally belong to its result: written together by
+ * this code, in one statement. A row written by older code lacks them, or (updated by an
+ * older server during a rolling deploy) holds another computation's, and is computed
+ * again. Saying so opens no stored answer.
+ */
+const STORED_COMPLETE = 'r.result_br IS NOT NULL AND r.answers_computed_at = r.computed_at';
+
 export interface RollupRow {
   bomId: string;
   workspaceId: string;
@@ -84,7 +92,9 @@ async function computeRollup(db: Knex, workspaceId: string, given: BomRow, epoch
       landedPerUnit: cost.totals.landedPerUnit, targetUnitCost: bom.targetUnitCost, leftOut: cost.leftOut.count,
       warnings: cost.warnings.length + cost.lineWarningCount,
       totals: JSON.stringify(cost.totals), result: resultText, stress: `{"tally":${JSON.stringify(stress.tally)},"check":${checkText}}`, stressTally: JSON.stringify(stress.tally),
-      resultGzip: result.gzip, resultBr: result.br, checkGzip: checked?.gzip ?? null, checkBr: checked?.br ?? null, computedAt: db.fn.now(),
+      resultGzip: result.gzip, resultBr: result.br, checkGzip: checked?.gzip ?? null, checkBr: checked?.br ?? null,
+      // The same now() (the transaction's start) in both: see STORED_COMPLETE.
+      computedAt: db.fn.now(), answersComputedAt: db.fn.now(),
     };
     await db('cost_rollups').insert(row).onConflict('bom_id').merge();
     return { cost, stress };
@@ -145,10 +155,11 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   let stale = false;
   for (const bom of boms) {
     const r = byBom.get(bom.id);
-    // A stored roll-up is served even when stale (and refreshed behind); one that never
-    // existed, or that was stored before the stress check was kept with it, is computed now.
-    if (r && r.hasStress) {
-      const fresh = isFresh(r, epoch, bom);
+    // A stored roll-up is served even when stale or incomplete (stored by older code), and
+    // refreshed behind: a list of many BOMs never waits for their rolls. Only one that
+    // never existed is computed now.
+    if (r) {
+      const fresh = r.hasStress && isFresh(r, epoch, bom);
       stale ||= !fresh;
       out.set(bom.id, { ...r, fresh });
       continue;
@@ -163,12 +174,6 @@ export async function rollupsFor(deps: Deps, workspaceId: string, boms: BomRow[]
   if (stale) await queueRefresh(deps, workspaceId);
   return out;
 }
-
-/**
- * A roll-up stored by this code: the brotli form is the last thing added to it, so a row
- * with it has every field (saying so opens no stored answer).
- */
-const STORED_COMPLETE = 'r.result_br IS NOT NULL';
 
 type StoredText = { epoch: string; costingDate: string; qty: number; complete: boolean; text?: string | null; bytes?: Buffer | null };
 
@@ -209,8 +214,10 @@ function freshAnswer(s: StoredText | undefined, epoch: string, bom: BomRow, enco
  * The cost roll at the planned quantity today: the stored one when fresh (sent as it is
  * stored, in the encoding the client takes or as text), else computed and stored.
  */
-export async function plannedCost(deps: Deps, workspaceId: string, bomId: string, encoding: Encoding | null = null): Promise<CostView | RawJson> {
+export async function plannedCost(deps: Deps, workspaceId: string, bomId: string, encoding: Encoding | null = null, askedQty?: number): Promise<CostView | RawJson> {
   const { bom, epoch, stored } = await readPlanned(deps.db, workspaceId, bomId, { text: 'r.result::text', compressed: encoding ? `result_${encoding}` : undefined });
+  // Asked for a quantity that was the planned one a moment ago: it still answers at that quantity.
+  if (askedQty !== undefined && askedQty !== bom.plannedQty) return costOf(deps.db, workspaceId, bom, askedQty);
   return freshAnswer(stored, epoch, bom, encoding) ?? refreshRollup(deps.db, workspaceId, bom, epoch);
 }
 
@@ -229,7 +236,8 @@ export async function plannedTotals(deps: Deps, workspaceId: string, bomId: stri
 
 /**
  * The stress check: the one stored with a fresh roll-up, with the waivers read now (sent
- * as stored when the BOM has none); else the roll-up is computed and stored first.
+ * as stored when the BOM has none); with a stale roll-up, checked now and a refresh
+ * queued; with none, the roll-up is computed and stored first.
  */
 export async function plannedStress(deps: Deps, workspaceId: string, bomId: string, encoding: Encoding | null = null): Promise<StressCheckView | RawJson> {
   const { bom, epoch, stored, waived } = await readPlanned(deps.db, workspaceId, bomId, { text: `(r.stress -> 'check')::text`, compressed: encoding ? `check_${encoding}` : undefined, waivers: true });
@@ -237,7 +245,12 @@ export async function plannedStress(deps: Deps, workspaceId: string, bomId: stri
   if (fresh && fresh.text !== 'null') return waived ? withWaivers(deps.db, workspaceId, JSON.parse(fresh.text) as StressCheckView) : fresh;
   // Stored as null: the workspace has no stress policy (stressOf says so, 409).
   if (fresh || (stored?.complete && isFresh(stored, epoch, bom))) return stressOf(deps.db, workspaceId, bom);
-  // Stale or never stored: the roll-up is computed once for all who ask meanwhile, and stored.
+  if (stored) {
+    // Stale: checked now (no cost roll to wait for) and the roll-up refreshed behind.
+    await queueRefresh(deps, workspaceId);
+    return stressOf(deps.db, workspaceId, bom);
+  }
+  // Never stored: the roll-up is computed once for all who ask meanwhile, and stored.
   const { stress } = await computeRollup(deps.db, workspaceId, bom, epoch);
   if (!stress.check) return stressOf(deps.db, workspaceId, bom);
   return waived ? withWaivers(deps.db, workspaceId, structuredClone(stress.check)) : stress.check;
@@ -255,7 +268,7 @@ export async function refreshWorkspace(deps: Deps, workspaceId: string): Promise
   const boms = (await scoped(deps.db, 'boms', workspaceId)) as BomRow[];
   const stored = (await scoped(deps.db, 'cost_rollups', workspaceId)
     // Read without opening the stored answers (large ones take long to decompress).
-    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`${STORED_COMPLETE.replace('r.', '')} AS has_stress`))) as RollupRow[];
+    .select('bomId', 'epoch', deps.db.raw(`to_char(costing_date, 'YYYY-MM-DD') as costing_date`), 'qty', deps.db.raw(`${STORED_COMPLETE.replaceAll('r.', '')} AS has_stress`))) as RollupRow[];
   const byBom = new Map(stored.map((r) => [r.bomId, r]));
   let n = 0;
   for (const bom of boms) {

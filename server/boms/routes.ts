@@ -111,7 +111,7 @@ export const bomRoutes: RouteDef[] = [
 
   route({
     method: 'get', path: '/api/boms/:id/lines', access: 'boms.read', tag: 'Lines',
-    summary: 'The lines of a BOM in order, 500 a page (`limit` up to 5,000); `nextCursor` asks for the next page.', params: idParams, query: lineListQuery,
+    summary: 'The lines of a BOM in order, 500 a page (`limit` up to 5,000); `nextCursor` asks for the next page, and a 409 says the lines changed between pages (read again from the first).', params: idParams, query: lineListQuery,
     handler: async ({ auth, params, query, deps }) => {
       const page = await linesPage(deps.db, auth.workspaceId, params.id, query.limit, query.cursor);
       // The BOM is read only to tell an empty BOM from a missing one (404).
@@ -174,7 +174,9 @@ export const bomRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/cost', access: 'boms.read', tag: 'Cost roll',
     summary: 'The cost roll: landed cost per unit at a build quantity (default: planned) and costing date (default: today), per line and in totals, in the reporting currency.',
     params: idParams, query: costQuery,
-    handler: async ({ req, auth, params, query, deps }) => {
+    handler: async ({ req, res, auth, params, query, deps }) => {
+      // The same URL may go compressed or not, by the request's Accept-Encoding.
+      res.vary('Accept-Encoding');
       // The usual read (planned quantity, today) takes the BOM with its stored roll-up.
       if (query.qty === undefined && query.date === undefined) {
         return query.view === 'totals' ? plannedTotals(deps, auth.workspaceId, params.id) : plannedCost(deps, auth.workspaceId, params.id, acceptedEncoding(req));
@@ -184,7 +186,7 @@ export const bomRoutes: RouteDef[] = [
       if (query.view === 'totals') {
         return planned ? plannedTotals(deps, auth.workspaceId, bom.id) : costTotalsOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
       }
-      return planned ? plannedCost(deps, auth.workspaceId, bom.id, acceptedEncoding(req)) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
+      return planned ? plannedCost(deps, auth.workspaceId, bom.id, acceptedEncoding(req), query.qty) : costOf(deps.db, auth.workspaceId, bom, query.qty, query.date);
     },
   }),
   route({

@@ -20,8 +20,9 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   if (!e || typeof e !== 'object') return false;
   if (e.name === 'KnexTimeoutError') return true;
   if (e.code && connectionCodes.has(e.code)) return true;
-  // 57P01 admin shutdown, 57P02 crash shutdown, 57P03 cannot connect now, 08xxx connection exceptions
-  if (e.code && (/^57P0[123]$/.test(e.code) || e.code.startsWith('08'))) return true;
+  // 57P01 admin shutdown, 57P02 crash shutdown, 57P03 cannot connect now, 53300 too many
+  // connections, 08xxx connection exceptions
+  if (e.code && (/^57P0[123]$/.test(e.code) || e.code === '53300' || e.code.startsWith('08'))) return true;
   const m = e.message ?? '';
   return /Connection terminated|connect ECONNREFUSED|the database system is (starting up|shutting down)|Client has encountered a connection error/i.test(m);
 }

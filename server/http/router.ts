@@ -43,7 +43,8 @@ export function buildRouter(routes: RouteDef[], deps: Deps, limiters: { auth: Mi
         if (res.headersSent) return;
         if (result === undefined) res.status(def.status ?? 204).end();
         else if (result instanceof RawJson && result.compressed) {
-          res.status(def.status ?? 200).type('application/json').set({ 'Content-Encoding': result.compressed.encoding, Vary: 'Accept-Encoding' }).send(result.compressed.bytes);
+          res.vary('Accept-Encoding');
+          res.status(def.status ?? 200).type('application/json').set('Content-Encoding', result.compressed.encoding).send(result.compressed.bytes);
         } else if (result instanceof RawJson) res.status(def.status ?? 200).type('application/json').send(result.text);
         else res.status(def.status ?? 200).json(result);
       } catch (err) {

@@ -68,7 +68,11 @@ export const stressRoutes: RouteDef[] = [
     method: 'get', path: '/api/boms/:id/stress', access: 'boms.read', tag: 'Stress check',
     summary: "The stress check: every rated line's checks at its operating point under the BOM's policy (applied, rated, ratio, limit, status, formula), the line's worst status, a tally and the caution.",
     params: idParams,
-    handler: async ({ req, auth, params, deps }) => plannedStress(deps, auth.workspaceId, params.id, acceptedEncoding(req)),
+    handler: async ({ req, res, auth, params, deps }) => {
+      // The same URL may go compressed or not, by the request's Accept-Encoding.
+      res.vary('Accept-Encoding');
+      return plannedStress(deps, auth.workspaceId, params.id, acceptedEncoding(req));
+    },
   }),
   route({
     method: 'post', path: '/api/boms/:id/lines/:lineId/waivers', access: 'boms.write', tag: 'Stress check', status: 201,

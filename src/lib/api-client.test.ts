@@ -87,4 +87,24 @@ describe('api client', () => {
     expect(await getAllPages<{ id: string }>('/api/tokens')).toEqual([{ id: '1' }, { id: '2' }]);
     expect(calls.map((call) => call.url)).toEqual(['/api/tokens', '/api/tokens?cursor=c2']);
   });
+
+  it('reads a list again from the start when it changed between pages (409), at most three times', async () => {
+    const changed = jsonResponse(409, { error: { code: 'conflict', message: 'The lines changed while they were read page by page.' } });
+    const calls = answer(
+      jsonResponse(200, { items: [{ id: '1' }], nextCursor: 'a' }),
+      changed,
+      jsonResponse(200, { items: [{ id: '3' }], nextCursor: 'b' }),
+      jsonResponse(200, { items: [{ id: '1' }], nextCursor: null }),
+    );
+    expect(await getAllPages<{ id: string }>('/api/boms/7/lines')).toEqual([{ id: '3' }, { id: '1' }]);
+    expect(calls.map((call) => call.url)).toEqual(['/api/boms/7/lines', '/api/boms/7/lines?cursor=a', '/api/boms/7/lines', '/api/boms/7/lines?cursor=b']);
+    const again = () => [jsonResponse(200, { items: [{ id: '1' }], nextCursor: 'a' }), jsonResponse(409, { error: { code: 'conflict', message: 'changed' } })];
+    answer(...again(), ...again(), ...again());
+    await expect(getAllPages('/api/boms/7/lines')).rejects.toMatchObject({ status: 409 });
+  });
+
+  it('never returns part of a list: a server answering the same page twice is an error', async () => {
+    answer(jsonResponse(200, { items: [{ id: '1' }], nextCursor: 'a' }), jsonResponse(200, { items: [{ id: '1' }], nextCursor: 'a' }));
+    await expect(getAllPages('/api/tokens')).rejects.toMatchObject({ code: 'paging_stuck' });
+  });
 });

@@ -121,22 +121,35 @@ export type Page<T> = { items: T[]; nextCursor: string | null };
 
 /**
  * Reads a list to its end by following `nextCursor`. For the short lists of settings
- * (members, invites, tokens), where one screen shows every row; `query` adds filters
- * and a page size (the parts library reads thousands of rows in a few large pages).
+ * (members, invites, tokens), where one screen shows every row, and for long ones read
+ * in pages (a BOM's lines, the parts library); `query` adds filters and a page size.
+ * A list that changed between its pages answers 409: it is read again from the start
+ * (at most three times), so the rows shown are one consistent read.
  */
 export async function getAllPages<T>(
   path: string,
   signal?: AbortSignal,
   query: Record<string, string | number | undefined> = {},
 ): Promise<T[]> {
+  for (let attempt = 1; ; attempt += 1) {
+    try {
+      return await readPages<T>(path, signal, query);
+    } catch (err) {
+      if (!(err instanceof ApiError && err.status === 409 && attempt < 3)) throw err;
+    }
+  }
+}
+
+async function readPages<T>(path: string, signal: AbortSignal | undefined, query: Record<string, string | number | undefined>): Promise<T[]> {
   const items: T[] = [];
   let cursor: string | undefined;
-  // A guard against a server that keeps answering the same cursor.
-  for (let pageCount = 0; pageCount < 100; pageCount += 1) {
+  // A guard against a server that keeps answering: a list this long is not shown whole.
+  for (let pageCount = 0; pageCount < 1000; pageCount += 1) {
     const page = await api.get<Page<T>>(path, { query: { ...query, cursor }, signal });
     items.push(...page.items);
-    if (!page.nextCursor || page.nextCursor === cursor) break;
+    if (!page.nextCursor) return items;
+    if (page.nextCursor === cursor) throw new ApiError(500, 'paging_stuck', 'The server answered the same page twice.');
     cursor = page.nextCursor;
   }
-  return items;
+  throw new ApiError(413, 'list_too_long', 'This list is too long to show whole.');
 }

@@ -136,6 +136,19 @@ describe('BOMs, lines and the cost roll', () => {
     } while (cursor);
     expect(pages.map((p) => p.items.length)).toEqual([3, 3, 1]);
     expect(pages.flatMap((p) => p.items)).toEqual(whole.items);
+    // Lines moved, added or removed between two pages: 409, and a read from the start is consistent.
+    const first = (await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ limit: 3 }).expect(200)).body;
+    const moved = whole.items[6];
+    await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${moved.id}`).send({ version: moved.version, position: 1 }).expect(200);
+    const changed = await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ limit: 3, cursor: first.nextCursor }).expect(409);
+    expect(changed.body.error.message).toMatch(/read them again from the first page/);
+    await ws.agents.designer.delete(`/api/boms/${bom.id}/lines/${whole.items[0].id}`).expect(204);
+    // Six lines left: five on the first page; the sixth, deleted, leaves the second page empty.
+    const five = (await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ limit: 5 }).expect(200)).body;
+    const all = (await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).expect(200)).body.items;
+    expect(all).toHaveLength(6);
+    await ws.agents.designer.delete(`/api/boms/${bom.id}/lines/${all[5].id}`).expect(204);
+    await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ limit: 5, cursor: five.nextCursor }).expect(409);
     // A cursor is the API's own: anything else is a 400 that names the field.
     const bad = await ws.agents.viewer.get(`/api/boms/${bom.id}/lines`).query({ cursor: "5' OR 1=1" }).expect(400);
     expect(bad.body.error.details[0].path).toBe('cursor');
@@ -278,6 +291,21 @@ describe('the stored roll-up', () => {
       expect(res.headers.vary).toMatch(/Accept-Encoding/);
       expect(res.body).toEqual(computed.body);
     }
+    // A row rewritten by a server that does not know the compressed forms (a rolling
+    // deploy): its brotli belongs to another computation, so it is not sent; the roll is
+    // computed again, and stored whole.
+    const db = t.database.db;
+    await db('cost_rollups').where({ bomId: bom.id }).update({ computedAt: db.raw(`computed_at + interval '1 second'`) });
+    const redone = await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', 'br').expect(200);
+    expect(redone.headers['content-encoding']).toBeUndefined();
+    expect(redone.body.totals).toEqual(computed.body.totals);
+    expect((await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).set('Accept-Encoding', 'br').expect(200)).headers['content-encoding']).toBe('br');
+    // The BOM list never computes such a row while the user waits: it shows it as not
+    // fresh, and the refresh queued behind makes it fresh.
+    await db('cost_rollups').where({ bomId: bom.id }).update({ answersComputedAt: null });
+    const listed = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id);
+    expect(listed.cost).toMatchObject({ landedPerUnit: computed.body.totals.landedPerUnit, fresh: false });
+    await expect.poll(async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bom.id).cost.fresh, { timeout: 10_000 }).toBe(true);
     // No Accept-Encoding, or one that takes neither: the stored JSON text.
     for (const encoding of [undefined, 'identity', 'br;q=0, gzip;q=0']) {
       const req = ws.agents.viewer.get(`/api/boms/${bom.id}/cost`);
@@ -285,6 +313,7 @@ describe('the stored roll-up', () => {
       else req.unset('Accept-Encoding');
       const plain = await req.expect(200);
       expect(plain.headers['content-encoding'], encoding).toBeUndefined();
+      expect(plain.headers.vary, encoding).toMatch(/Accept-Encoding/);
       expect(plain.body).toEqual(computed.body);
     }
   });

@@ -168,5 +168,5 @@ export const compareQuery = z.strictObject({
  */
 export const lineListQuery = z.strictObject({
   limit: z.coerce.number().int().min(1).max(5000).default(500),
-  cursor: z.string().regex(/^[0-9]{1,10}\.[1-9][0-9]{0,17}$/, 'must be a nextCursor from the page before').optional(),
+  cursor: z.string().regex(/^[0-9]{1,10}\.[1-9][0-9]{0,17}\.[0-9]{1,19}$/, 'must be a nextCursor from the page before').optional(),
 });

@@ -47,6 +47,7 @@ function runServer() {
 function runPrimary(n: number) {
   let listening = 0;
   let stopping = false;
+  let deaths: number[] = [];
   const log = (s: string) => config.LOG_LEVEL !== 'silent' && console.error(`[farthing] ${s}`);
   for (let i = 0; i < n; i++) cluster.fork();
   cluster.on('message', (_worker, message: { ready?: boolean; port?: number }) => {
@@ -57,6 +58,14 @@ function runPrimary(n: number) {
     // One that dies before all are up is a start-up fault (a bad setting, a taken port): stop.
     if (listening < n) {
       log(`a server process exited (${signal ?? code}) while starting`);
+      void stop(1);
+      return;
+    }
+    // Replaced at once, but not in a loop: more than five deaths in a minute stop it all.
+    const now = Date.now();
+    deaths = deaths.filter((t) => now - t < 60_000).concat(now);
+    if (deaths.length > 5) {
+      log('server processes keep dying; stopping');
       void stop(1);
       return;
     }

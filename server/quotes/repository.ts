@@ -80,7 +80,9 @@ export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: 
     [workspaceId, ...idParams],
   )) as { rows: { r: string }[] };
   return rows.map(({ r }) => {
-    const [id, partId, supplierId, currency, incoterm, moq, orderMultiple, leadTimeDays, validFrom, validUntil, createdAt, breaks] = r.split('|');
+    const fields = r.split('|');
+    if (fields.length !== 12) throw new Error(`a quote row did not split into its 12 fields: ${r.slice(0, 80)}`);
+    const [id, partId, supplierId, currency, incoterm, moq, orderMultiple, leadTimeDays, validFrom, validUntil, createdAt, breaks] = fields;
     return {
       id, partId, supplierId, currency, incoterm: incoterm as CostingQuote['incoterm'], moq: Number(moq), orderMultiple: Number(orderMultiple),
       leadTimeDays: leadTimeDays === '' ? null : Number(leadTimeDays), validFrom: validFrom || null, validUntil: validUntil || null,

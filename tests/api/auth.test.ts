@@ -163,6 +163,11 @@ describe('several workspaces', () => {
     const sw = await a.agent.post('/api/auth/switch').send({ workspaceId: b.workspace.id }).expect(200);
     expect(sw.body).toMatchObject({ role: 'viewer', workspace: { name: 'Beta' } });
     expect((await a.agent.get('/api/auth/me')).body.role).toBe('viewer');
+    // The role that applies is the one in the workspace now chosen, from the next request on.
+    await a.agent.post('/api/parts').send({ internalPn: `SW-${Date.now()}`, category: 'other' }).expect(403);
+    await a.agent.post('/api/auth/switch').send({ workspaceId: a.workspace.id }).expect(200);
+    await a.agent.post('/api/parts').send({ internalPn: `SW-${Date.now()}`, category: 'other' }).expect(201);
+    await a.agent.post('/api/auth/switch').send({ workspaceId: b.workspace.id }).expect(200);
     // A workspace the user is not in is not found.
     const c = await signUp(t, { workspaceName: 'Gamma' });
     await a.agent.post('/api/auth/switch').send({ workspaceId: c.workspace.id }).expect(404);

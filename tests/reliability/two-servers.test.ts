@@ -110,12 +110,17 @@ describe('two servers side by side', () => {
     await expect.poll(onB, { timeout: 10_000 }).toBe('0.0070000000');
   });
 
-  it('one per core: a server started with WEB_CONCURRENCY=2 runs two processes on one port, replaces one that dies, and stops them all', async () => {
+  it('one per core: a server started with WEB_CONCURRENCY=2 on a new database starts cleanly, runs two processes on one port, replaces one that dies, and stops them all', async () => {
     const port = await freePort();
+    // A database no server has started on: both processes set up the job queues at once.
+    const fresh = await createTestDatabase();
     const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'silent', SERVE_CLIENT: 'false', MAIL_WORKER: 'false' },
-      stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+      env: { ...process.env, ...env, DATABASE_URL: fresh.url, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'error', SERVE_CLIENT: 'false' },
+      stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
     });
+    let logged = '';
+    proc.stdout!.on('data', (d: Buffer) => (logged += d.toString()));
+    proc.stderr!.on('data', (d: Buffer) => (logged += d.toString()));
     const url = `http://127.0.0.1:${port}`;
     const children = () => readFileSync(`/proc/${proc.pid}/task/${proc.pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
     try {
@@ -130,11 +135,17 @@ describe('two servers side by side', () => {
       process.kill(first[0], 'SIGKILL');
       await expect.poll(() => children().filter((pid) => pid !== first[0]).length, { timeout: 15_000 }).toBe(2);
       for (let i = 0; i < 6; i++) await request(url).get('/api/auth/me').expect(401);
+      // Both queues exist once, and no process logged an error while they were made.
+      const queues = await fresh.db.raw(`SELECT name FROM pgboss.queue ORDER BY name`);
+      expect(queues.rows.map((q: { name: string }) => q.name)).toEqual(['cost-rollup', 'mail']);
+      expect(logged).not.toMatch(/"level":(50|60)|deadlock|unhandled|did not start/);
+      expect(logged).toMatch(/exited \(SIGKILL\); starting another/);
     } finally {
       const all = children();
       proc.kill('SIGTERM');
       await new Promise((r) => proc.once('exit', r));
       for (const pid of all) expect(existsSync(`/proc/${pid}`) && !readFileSync(`/proc/${pid}/status`, 'utf8').includes('State:\tZ'), `process ${pid}`).toBe(false);
+      await fresh.drop();
     }
   }, 60_000);
 });

@@ -104,25 +104,27 @@ describe('invite and accept', () => {
 
   it('a designer may not invite (403) and a workspace keeps one owner (409)', async () => {
     const owner = await signUp(t);
-    const email = `des-${Date.now()}@tinbell.example`;
-    await owner.agent.post('/api/invites').send({ email, role: 'designer' }).expect(201);
-    const token = linkIn((await waitForMail(t.sink, email)).text, '/invite');
-    const designer = t.agent();
-    await designer.post('/api/invites/accept').send({ token, name: 'Dev', password: 'designer pass 1' }).expect(200);
+    const { agent: designer } = await invitedMember(owner.agent, 'des', 'designer');
     await designer.post('/api/invites').send({ email: 'x@tinbell.example', role: 'owner' }).expect(403);
     await designer.patch(`/api/members/${owner.user.id}`).send({ role: 'viewer' }).expect(403);
     await owner.agent.patch(`/api/members/${owner.user.id}`).send({ role: 'viewer' }).expect(409);
   });
 });
 
+/** A new user invited by mail into the inviter's workspace with a role, signed in as they accept. */
+async function invitedMember(inviter: ReturnType<TestApp['agent']>, prefix: string, role: string) {
+  const email = `${prefix}-${Date.now()}@tinbell.example`;
+  await inviter.post('/api/invites').send({ email, role }).expect(201);
+  const token = linkIn((await waitForMail(t.sink, email)).text, '/invite');
+  const agent = t.agent();
+  const accepted = await agent.post('/api/invites/accept').send({ token, name: prefix, password: `${prefix} password 1` }).expect(200);
+  return { agent, accepted };
+}
+
 describe('roles apply at once', () => {
   it("a member's next request after a role change or removal uses the new role, signed in all along", async () => {
     const owner = await signUp(t);
-    const email = `mover-${Date.now()}@tinbell.example`;
-    await owner.agent.post('/api/invites').send({ email, role: 'designer' }).expect(201);
-    const token = linkIn((await waitForMail(t.sink, email)).text, '/invite');
-    const member = t.agent();
-    const accepted = await member.post('/api/invites/accept').send({ token, name: 'Mover', password: 'mover password 1' }).expect(200);
+    const { agent: member, accepted } = await invitedMember(owner.agent, 'mover', 'designer');
     const partBody = () => ({ internalPn: `MV-${Date.now()}-${Math.random()}`, category: 'other' });
     await member.post('/api/parts').send(partBody()).expect(201);
     await owner.agent.patch(`/api/members/${accepted.body.user.id}`).send({ role: 'viewer' }).expect(200);

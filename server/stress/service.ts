@@ -65,10 +65,6 @@ export async function stressCheckOf(db: DbOrTrx, workspaceId: string, bom: BomRo
 
 export type StressCheckView = Awaited<ReturnType<typeof stressCheckOf>>;
 
-export function hasWaivers(db: DbOrTrx, workspaceId: string, bomId: string): Promise<boolean> {
-  return scoped(db, 'stress_waivers', workspaceId).andWhere({ bomId }).first('id').then(Boolean);
-}
-
 /**
  * The check with the waivers that still hold. A waiver lapses when what it waived changes:
  * the line (operating point, part), the part's ratings, or the policy.

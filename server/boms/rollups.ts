@@ -184,7 +184,11 @@ type StoredText = { epoch: string; costingDate: string; qty: number; complete: b
  * the stored check comes as text (the waivers are added to it).
  */
 async function readPlanned(db: DbOrTrx, workspaceId: string, bomId: string, part: { text: string; compressed?: string; waivers?: boolean }) {
-  const waived = part.waivers ? 'EXISTS (SELECT 1 FROM stress_waivers sw WHERE sw.workspace_id = b.workspace_id AND sw.bom_id = b.id)' : 'false';
+  // Whether the BOM has waivers, looked up once (LATERAL) and used three times below.
+  const waivers = part.waivers
+    ? 'CROSS JOIN LATERAL (SELECT EXISTS (SELECT 1 FROM stress_waivers sw WHERE sw.workspace_id = b.workspace_id AND sw.bom_id = b.id) AS any) wv'
+    : '';
+  const waived = part.waivers ? 'wv.any' : 'false';
   const answer = part.compressed
     ? `CASE WHEN ${waived} THEN ${part.text} END AS "storedText", CASE WHEN NOT ${waived} THEN r.${part.compressed} END AS "storedBytes"`
     : `${part.text} AS "storedText"`;
@@ -193,6 +197,7 @@ async function readPlanned(db: DbOrTrx, workspaceId: string, bomId: string, part
             ${STORED_COMPLETE} AS "storedComplete", ${waived} AS "waived", ${answer}
        FROM boms b JOIN workspaces w ON w.id = b.workspace_id
        LEFT JOIN cost_rollups r ON r.bom_id = b.id AND r.workspace_id = b.workspace_id
+       ${waivers}
       WHERE b.workspace_id = ? AND b.id = ?`,
     [workspaceId, bomId],
   )) as { rows: Record<string, unknown>[] };

@@ -112,6 +112,7 @@ describe('BOMs, lines and the cost roll', () => {
       await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ refDes: 'R1', partId: part.id, qtyPerUnit: '1' }).expect(201);
       return (await ws.agents.viewer.get(`/api/boms/${bom.id}/cost`).expect(200)).body.lines[0];
     };
+    // Order quantity, excess and the cheapest whole order as costing.md sets them (demo prices):
     // 1,000 needed: the reel's 2,500 at 0.001 (2.50, 1.50 of it excess) beats 1,000 at 0.004 (4.00).
     expect(await lineOf(profile.id)).toMatchObject({ quoteId: reel.id, requiredQty: 1000, orderQty: 2500, goodsValue: '2.500000', excessValue: '1.500000' });
     // With a lead-time limit a quote without a lead time cannot pass it (costing.md).

@@ -6,69 +6,37 @@
  * server's memory 10 s after each run, as JSON (also written to .data/bench-load.json).
  * Targets: 0 errors, p99 under 250 ms for reads, no memory growth between the runs.
  */
-import { spawn } from 'node:child_process';
-import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
+import { writeFileSync, mkdirSync } from 'node:fs';
 import autocannon from 'autocannon';
-import { prepareDatabase } from './lib/database';
-import { createDb } from '../server/db/knex';
-import { migrateLatest, seedConfig } from '../server/db/migrate';
-import { startMailSink } from '../server/mail/sink';
-import { startS3Fake } from '../server/files/s3-fake';
-import { demoPassword } from '../seeds/01_demo_workspace';
+import { startBenchApp } from './lib/bench-app';
 
 const seconds = Math.min(60, Number(process.env.LOAD_SECONDS ?? 20));
 const connections = Number(process.env.LOAD_CONNECTIONS ?? 50);
-const port = Number(process.env.LOAD_PORT ?? 4180);
-const base = `http://127.0.0.1:${port}`;
 
 async function main() {
-  const database = prepareDatabase({ folder: 'pg-test', port: Number(process.env.FARTHING_TEST_PG_PORT ?? 54339), database: 'postgres', log: (s) => console.error(s) });
-  const admin = createDb(database.url);
-  await admin.raw('DROP DATABASE IF EXISTS farthing_load WITH (FORCE)');
-  await admin.raw('CREATE DATABASE farthing_load');
-  await admin.destroy();
-  const url = database.url.replace(/\/[^/]*$/, '/farthing_load');
-  const db = createDb(url);
-  await migrateLatest(db);
-  await db.seed.run(seedConfig);
-  // A generated 1,000-line BOM over the demo library.
-  const ws = await db('workspaces').where('name', 'like', 'Tinbell%').first('id');
-  const parts = (await db('parts').where({ workspaceId: ws.id }).whereIn('category', ['resistor', 'capacitor', 'diode', 'led', 'bjt', 'mosfet']).select('id')) as { id: string }[];
-  const profile = await db('landed_cost_profiles').where({ workspaceId: ws.id }).first('id');
-  const { rows } = await db.raw(`SELECT nextval(pg_get_serial_sequence('boms', 'id')) AS id`);
-  const bomId = String(rows[0].id);
-  await db('boms').insert({ id: bomId, familyId: bomId, workspaceId: ws.id, name: 'Load test BOM (1,000 lines)', reportingCurrency: 'GBP', profileId: profile.id, plannedQty: 20000, shelf: '{}' });
-  await db('bom_lines').insert(Array.from({ length: 1000 }, (_, i) => ({ workspaceId: ws.id, bomId, position: i, partId: parts[i % parts.length].id, qtyPerUnit: '1', refDes: `X${i + 1}`, opVoltageV: 3 + (i % 10) })));
-  const lineIds = ((await db('bom_lines').where({ bomId }).orderBy('position').select('id')) as { id: string }[]).map((l) => l.id);
-  const boardPart = parts[0].id;
-  await db.destroy();
-
-  const sink = await startMailSink();
-  const s3 = await startS3Fake({ directory: '.data/s3-load', bucket: 'farthing' });
-  // LOAD_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=.data/profiles", profiles the server under load.
-  const nodeArgs = (process.env.LOAD_NODE_ARGS ?? '').split(' ').filter(Boolean);
-  const server = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
-    env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: url, PORT: String(port), PUBLIC_URL: base, SESSION_SECRET: 'load-test-secret-0123456789', SMTP_PORT: String(sink.smtpPort), S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, SERVE_CLIENT: 'false', LOG_LEVEL: 'error', RATE_LIMIT_AUTH_PER_MINUTE: '1000' },
-    stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+  let bomId = '';
+  let lineIds: string[] = [];
+  let boardPart = '';
+  const app = await startBenchApp({
+    database: 'farthing_load',
+    port: Number(process.env.LOAD_PORT ?? 4180),
+    // A generated 1,000-line BOM over the demo library.
+    prepare: async (db) => {
+      const ws = await db('workspaces').where('name', 'like', 'Tinbell%').first('id');
+      const parts = (await db('parts').where({ workspaceId: ws.id }).whereIn('category', ['resistor', 'capacitor', 'diode', 'led', 'bjt', 'mosfet']).select('id')) as { id: string }[];
+      const profile = await db('landed_cost_profiles').where({ workspaceId: ws.id }).first('id');
+      const { rows } = await db.raw(`SELECT nextval(pg_get_serial_sequence('boms', 'id')) AS id`);
+      bomId = String(rows[0].id);
+      await db('boms').insert({ id: bomId, familyId: bomId, workspaceId: ws.id, name: 'Load test BOM (1,000 lines)', reportingCurrency: 'GBP', profileId: profile.id, plannedQty: 20000, shelf: '{}' });
+      await db('bom_lines').insert(Array.from({ length: 1000 }, (_, i) => ({ workspaceId: ws.id, bomId, position: i, partId: parts[i % parts.length].id, qtyPerUnit: '1', refDes: `X${i + 1}`, opVoltageV: 3 + (i % 10) })));
+      lineIds = ((await db('bom_lines').where({ bomId }).orderBy('position').select('id')) as { id: string }[]).map((l) => l.id);
+      boardPart = parts[0].id;
+    },
   });
-  // Should this script die early (Ctrl-C, a closed pipe), the server and the cluster go with it.
-  process.once('exit', () => {
-    server.kill('SIGKILL');
-    database.stop();
-  });
-  for (const signal of ['SIGINT', 'SIGTERM', 'SIGPIPE'] as const) process.once(signal, () => process.exit(130));
-  await new Promise<void>((resolve, reject) => {
-    server.once('message', () => resolve());
-    server.once('exit', (c) => reject(new Error(`server exited ${c}`)));
-  });
-  // The server's memory: its processes' together (one per core under NODE_ENV=production).
-  const rssOf = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))![1]) / 1024;
-  const childrenOf = (pid: number) => readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
-  const rss = () => [server.pid!, ...childrenOf(server.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0);
+  const base = app.base;
 
   try {
-    const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-requested-with': 'farthing' }, body: JSON.stringify({ email: 'owner@tinbell.example', password: demoPassword }) });
-    const cookie = (login.headers.get('set-cookie') ?? '').split(';')[0];
+    const cookie = await app.signIn('owner@tinbell.example');
     // As a browser sends them: it always offers gzip (stored answers go compressed then).
     const headers = { cookie, 'x-requested-with': 'farthing', 'content-type': 'application/json', 'accept-encoding': 'gzip, deflate, br' };
     const versions = new Map<string, number>(lineIds.map((id) => [id, 1]));
@@ -132,7 +100,7 @@ async function main() {
       const summary = {
         run, seconds, connections, totalRequests: outs.reduce((n, o) => n + o.requests, 0),
         throughputPerSec: outs.reduce((n, o) => n + o.throughputPerSec, 0), errors: outs.reduce((n, o) => n + o.errors, 0),
-        serverRssMb: Math.round(rss()), serverProcesses: childrenOf(server.pid!).length || 1, routes: outs,
+        serverRssMb: Math.round(app.rssMb()), serverProcesses: app.processes(), routes: outs,
       };
       console.log(JSON.stringify(summary));
       results.push(summary);
@@ -140,11 +108,7 @@ async function main() {
     mkdirSync('.data', { recursive: true });
     writeFileSync('.data/bench-load.json', JSON.stringify({ date: new Date().toISOString().slice(0, 10), results }, null, 2));
   } finally {
-    server.kill('SIGTERM');
-    await new Promise((r) => server.once('exit', r));
-    await sink.close();
-    await s3.close();
-    database.stop();
+    await app.stop();
   }
 }
 

@@ -132,7 +132,7 @@ export function LinesGrid({
     count: rows.length,
     getScrollElement: () => scrollRef.current,
     estimateSize: () => ROW_HEIGHT,
-    overscan: 12,
+    overscan: 6,
   });
 
   const ctx: ParseContext = useMemo(() => ({ parts }), [parts]);

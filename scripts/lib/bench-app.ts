@@ -1,0 +1,90 @@
+/**
+ * The app as `npm start` runs it (NODE_ENV=production, one process per core unless told),
+ * on a fresh database in the private test cluster with the demo workspace, its own mail
+ * sink and S3 fake: what `bench:load` and `bench:grid` drive.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { prepareDatabase } from './database';
+import { createDb, type Db } from '../../server/db/knex';
+import { migrateLatest, seedConfig } from '../../server/db/migrate';
+import { startMailSink } from '../../server/mail/sink';
+import { startS3Fake } from '../../server/files/s3-fake';
+import { demoPassword } from '../../seeds/01_demo_workspace';
+
+export interface BenchApp {
+  base: string;
+  server: ChildProcess;
+  /** Signs in a demo member; the session cookie as a `name=value` pair. */
+  signIn(email: string): Promise<string>;
+  /** Resident memory of the server's processes together, in MB. */
+  rssMb(): number;
+  processes(): number;
+  stop(): Promise<void>;
+}
+
+/**
+ * Makes `database` afresh with the demo data, lets `prepare` add to it, then starts the
+ * server on it. Should the calling script die early, the server and the cluster go too.
+ */
+export async function startBenchApp(opts: { database: string; port: number; env?: Record<string, string>; prepare?: (db: Db) => Promise<void> }): Promise<BenchApp> {
+  const cluster = prepareDatabase({ folder: 'pg-test', port: Number(process.env.FARTHING_TEST_PG_PORT ?? 54339), database: 'postgres', log: (s) => console.error(s) });
+  const admin = createDb(cluster.url);
+  await admin.raw(`DROP DATABASE IF EXISTS ${opts.database} WITH (FORCE)`);
+  await admin.raw(`CREATE DATABASE ${opts.database}`);
+  await admin.destroy();
+  const url = cluster.url.replace(/\/[^/]*$/, `/${opts.database}`);
+  const db = createDb(url);
+  try {
+    await migrateLatest(db);
+    await db.seed.run(seedConfig);
+    await opts.prepare?.(db);
+  } finally {
+    await db.destroy();
+  }
+
+  const base = `http://127.0.0.1:${opts.port}`;
+  const sink = await startMailSink();
+  const s3 = await startS3Fake({ directory: `.data/s3-${opts.database}`, bucket: 'farthing' });
+  // LOAD_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=.data/profiles", profiles the server.
+  const nodeArgs = (process.env.LOAD_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const server = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
+    env: {
+      ...process.env, NODE_ENV: 'production', DATABASE_URL: url, PORT: String(opts.port), PUBLIC_URL: base, SESSION_SECRET: 'bench-secret-0123456789',
+      SMTP_PORT: String(sink.smtpPort), S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, SERVE_CLIENT: 'false', LOG_LEVEL: 'error', RATE_LIMIT_AUTH_PER_MINUTE: '1000', ...opts.env,
+    },
+    stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+  });
+  process.once('exit', () => {
+    server.kill('SIGKILL');
+    cluster.stop();
+  });
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGPIPE'] as const) process.once(signal, () => process.exit(130));
+  await new Promise<void>((resolve, reject) => {
+    server.once('message', () => resolve());
+    server.once('exit', (c) => reject(new Error(`server exited ${c}`)));
+  });
+
+  const rssOf = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))![1]) / 1024;
+  const childrenOf = (pid: number) => readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
+  return {
+    base,
+    server,
+    signIn: async (email) => {
+      const login = await fetch(`${base}/api/auth/login`, {
+        method: 'POST', headers: { 'content-type': 'application/json', 'x-requested-with': 'farthing' }, body: JSON.stringify({ email, password: demoPassword }),
+      });
+      if (login.status !== 200) throw new Error(`sign-in as ${email} answered ${login.status}`);
+      return (login.headers.get('set-cookie') ?? '').split(';')[0];
+    },
+    rssMb: () => [server.pid!, ...childrenOf(server.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0),
+    processes: () => childrenOf(server.pid!).length || 1,
+    stop: async () => {
+      server.kill('SIGTERM');
+      await new Promise((r) => server.once('exit', r));
+      await sink.close();
+      await s3.close();
+      cluster.stop();
+    },
+  };
+}

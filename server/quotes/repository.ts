@@ -73,20 +73,24 @@ export async function quotesForCosting(db: DbOrTrx, workspaceId: string, parts: 
   const ids = Array.isArray(parts) ? '?::bigint[]' : 'ARRAY(SELECT part_id FROM bom_lines WHERE workspace_id = ? AND bom_id = ? AND part_id IS NOT NULL)';
   const idParams = Array.isArray(parts) ? [parts] : [workspaceId, parts.bomId];
   const { rows } = (await db.raw(
-    `SELECT concat_ws('|', q.id, q.part_id, q.supplier_id, q.currency, q.incoterm, q.moq, q.order_multiple,
-                      coalesce(q.lead_time_days::text, ''), coalesce(q.valid_from::text, ''), coalesce(q.valid_until::text, ''),
-                      to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"'), coalesce(q.breaks_text, '')) AS r
-       FROM quotes q WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) ORDER BY q.id`,
+    `SELECT ${COSTING_QUOTE_TEXT_SQL} AS r FROM quotes q WHERE q.workspace_id = ? AND q.part_id = ANY(${ids}) ORDER BY q.id`,
     [workspaceId, ...idParams],
   )) as { rows: { r: string }[] };
-  return rows.map(({ r }) => {
-    const fields = r.split('|');
-    if (fields.length !== 12) throw new Error(`a quote row did not split into its 12 fields: ${r.slice(0, 80)}`);
-    const [id, partId, supplierId, currency, incoterm, moq, orderMultiple, leadTimeDays, validFrom, validUntil, createdAt, breaks] = fields;
-    return {
-      id, partId, supplierId, currency, incoterm: incoterm as CostingQuote['incoterm'], moq: Number(moq), orderMultiple: Number(orderMultiple),
-      leadTimeDays: leadTimeDays === '' ? null : Number(leadTimeDays), validFrom: validFrom || null, validUntil: validUntil || null,
-      createdAt, priceBreaks: parseBreaksText(breaks || null),
-    };
-  });
+  return rows.map(({ r }) => costingQuoteFromText(r));
+}
+
+/** One quote as the text `COSTING_QUOTE_TEXT_SQL` makes of it (`q` is the quotes row). */
+export const COSTING_QUOTE_TEXT_SQL = `concat_ws('|', q.id, q.part_id, q.supplier_id, q.currency, q.incoterm, q.moq, q.order_multiple,
+  coalesce(q.lead_time_days::text, ''), coalesce(q.valid_from::text, ''), coalesce(q.valid_until::text, ''),
+  to_char(q.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"'), coalesce(q.breaks_text, ''))`;
+
+export function costingQuoteFromText(r: string): CostingQuote {
+  const fields = r.split('|');
+  if (fields.length !== 12) throw new Error(`a quote row did not split into its 12 fields: ${r.slice(0, 80)}`);
+  const [id, partId, supplierId, currency, incoterm, moq, orderMultiple, leadTimeDays, validFrom, validUntil, createdAt, breaks] = fields;
+  return {
+    id, partId, supplierId, currency, incoterm: incoterm as CostingQuote['incoterm'], moq: Number(moq), orderMultiple: Number(orderMultiple),
+    leadTimeDays: leadTimeDays === '' ? null : Number(leadTimeDays), validFrom: validFrom || null, validUntil: validUntil || null,
+    createdAt, priceBreaks: parseBreaksText(breaks || null),
+  };
 }

@@ -159,6 +159,29 @@ describe('the quote board', () => {
   });
 });
 
+describe('the quote board reads its profile', () => {
+  it('uses the profile asked for, else the first; another workspace\'s profile is a 400', async () => {
+    const buyer = await signUp(t, { workspaceName: 'Board profiles Co' });
+    const supplier = await makeSupplier(buyer.agent, { currency: 'USD', country: 'US' });
+    const part = await makePart(buyer.agent, { hsCode: '8533.21' });
+    await makeQuote(buyer.agent, part.id, supplier.id, { currency: 'USD', incoterm: 'FOB', priceBreaks: [{ minQty: 1, unitPrice: '0.0020' }] });
+    const first = await makeProfile(buyer.agent, { currency: 'USD', dutyBasis: 'FOB', defaultDutyPct: '0' });
+    const second = await makeProfile(buyer.agent, { currency: 'USD', dutyBasis: 'FOB', defaultDutyPct: '10' });
+    const board = async (query: Record<string, unknown>) => (await buyer.agent.get(`/api/parts/${part.id}/offers`).query({ qty: 10000, currency: 'USD', ...query }).expect(200)).body;
+    const byDefault = await board({});
+    const asked = await board({ profileId: second.id });
+    expect(byDefault.profileId).toBe(first.id);
+    expect(asked.profileId).toBe(second.id);
+    // Under FOB the buyer pays the import duty (Incoterms 2020): 10 % of the FOB value of
+    // 10,000 × USD 0.0020 = USD 20 is USD 2 with the second profile, nothing with the first.
+    expect(byDefault.offers[0]).toMatchObject({ goodsValue: '20.000000', duty: '0.000000', landed: '20.000000' });
+    expect(asked.offers[0]).toMatchObject({ goodsValue: '20.000000', duty: '2.000000', landed: '22.000000' });
+    const elsewhere = await makeProfile(owner.agent, { currency: 'USD' });
+    const res = await buyer.agent.get(`/api/parts/${part.id}/offers`).query({ qty: 10000, profileId: elsewhere.id }).expect(400);
+    expect(res.body.error.details[0].path).toBe('profileId');
+  });
+});
+
 describe('datasheets in the object store', () => {
   it('uploads a PDF, lists and downloads it; refuses other types and oversize files', async () => {
     const part = await makePart(owner.agent);

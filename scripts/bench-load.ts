@@ -2,7 +2,7 @@
  * `npm run bench:load`: the app on the test cluster with the demo data and a generated
  * 1,000-line BOM, driven on loopback by autocannon at 50 connections for a bounded time:
  * signed-in reads (BOM list, lines, cost roll, stress check, quote board) and writes (line
- * edits). Two consecutive runs; prints throughput, p50/p99 per route, errors and the
+ * edits). A 5-second warm-up (printed, not counted), then two consecutive runs; prints throughput, p50/p99 per route, errors and the
  * server's memory 10 s after each run, as JSON (also written to .data/bench-load.json).
  * Targets: 0 errors, p99 under 250 ms for reads, no memory growth between the runs.
  */
@@ -84,15 +84,27 @@ async function main() {
     const only = process.env.LOAD_ONLY;
     if (only) routes.splice(0, routes.length, ...routes.filter((r) => r.name === only).map((r) => ({ ...r, share: connections })));
     const results: unknown[] = [];
-    for (const run of [1, 2]) {
-      const outs = await Promise.all(
+    const drive = (duration: number) =>
+      Promise.all(
         routes.map((r) =>
-          autocannon({ url: base, connections: r.share, duration: seconds, headers, ...r.opts } as autocannon.Options).then((o) => ({
+          autocannon({ url: base, connections: r.share, duration, headers, ...r.opts } as autocannon.Options).then((o) => ({
             route: r.name, connections: r.share, requests: o.requests.total, throughputPerSec: Math.round(o.requests.average),
             p50Ms: o.latency.p50, p99Ms: o.latency.p99, errors: o.errors + o.timeouts + o.non2xx,
           })),
         ),
       );
+    // A short warm-up, as a server has before it takes traffic behind a load balancer: V8
+    // compiles the hot code, PostgreSQL reads the tables into its cache and the generated
+    // BOM gets its first roll-up. Printed, not counted.
+    const warmUpSeconds = Number(process.env.LOAD_WARMUP_SECONDS ?? 5);
+    let warmUp: unknown = null;
+    if (warmUpSeconds > 0) {
+      const outs = await drive(warmUpSeconds);
+      warmUp = { run: 'warm-up', seconds: warmUpSeconds, errors: outs.reduce((n, o) => n + o.errors, 0), routes: outs.map((o) => ({ route: o.route, p50Ms: o.p50Ms, p99Ms: o.p99Ms, errors: o.errors })) };
+      console.log(JSON.stringify(warmUp));
+    }
+    for (const run of [1, 2]) {
+      const outs = await drive(seconds);
       // The memory after the load has settled (V8 shrinks the heap some seconds after the
       // server goes idle), so two runs compare like with like rather than wherever a
       // collection happened to stand.
@@ -106,7 +118,7 @@ async function main() {
       results.push(summary);
     }
     mkdirSync('.data', { recursive: true });
-    writeFileSync('.data/bench-load.json', JSON.stringify({ date: new Date().toISOString().slice(0, 10), results }, null, 2));
+    writeFileSync('.data/bench-load.json', JSON.stringify({ date: new Date().toISOString().slice(0, 10), warmUp, results }, null, 2));
   } finally {
     await app.stop();
   }

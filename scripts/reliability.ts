@@ -59,16 +59,17 @@ if (existsSync('.data/bench-load.json')) {
     date: string;
     results: { run: number; seconds: number; connections: number; throughputPerSec: number; errors: number; serverRssMb: number; routes: { route: string; p50Ms: number; p99Ms: number; throughputPerSec: number; errors: number }[] }[];
   };
-  const last = b.results[b.results.length - 1];
+  const [first, last] = [b.results[0], b.results[b.results.length - 1]];
+  const firstP99 = new Map(first.routes.map((x) => [x.route, x.p99Ms]));
   load = [
     '',
-    `Load (\`npm run bench:load\`, ${b.date}: ${last.connections} connections for ${last.seconds} s, two runs; figures of the second run):`,
+    `Load (\`npm run bench:load\`, ${b.date}: ${last.connections} connections, a 5 s warm-up not counted, then two runs of ${last.seconds} s; req/s and p50 of the second run):`,
     '',
-    '| route | req/s | p50 (ms) | p99 (ms) | errors |',
-    '|---|---|---|---|---|',
-    ...last.routes.map((x) => `| ${x.route} | ${x.throughputPerSec} | ${x.p50Ms} | ${x.p99Ms} | ${x.errors} |`),
+    '| route | req/s | p50 (ms) | p99 run 1 (ms) | p99 run 2 (ms) | errors (both runs) |',
+    '|---|---|---|---|---|---|',
+    ...last.routes.map((x) => `| ${x.route} | ${x.throughputPerSec} | ${x.p50Ms} | ${firstP99.get(x.route)} | ${x.p99Ms} | ${b.results.reduce((n, r) => n + (r.routes.find((y) => y.route === x.route)?.errors ?? 0), 0)} |`),
     '',
-    `Total ${last.throughputPerSec} req/s, ${last.errors} errors; server memory after run 1 / run 2: ${b.results.map((x) => `${x.serverRssMb} MB`).join(' / ')}.`,
+    `Total ${first.throughputPerSec} / ${last.throughputPerSec} req/s in run 1 / run 2, ${b.results.reduce((n, r) => n + r.errors, 0)} errors; server memory 10 s after run 1 / run 2: ${b.results.map((x) => `${x.serverRssMb} MB`).join(' / ')}.`,
   ].join('\n');
 }
 const readme = readFileSync('README.md', 'utf8');

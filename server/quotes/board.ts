@@ -4,7 +4,9 @@ import type { DbOrTrx } from '../db/knex';
 import { quoteBoard, CostingInputError, type FxRate } from '../costing';
 import { COSTING_QUOTE_TEXT_SQL, costingQuoteFromText, today } from './repository';
 import { RATES_AS_OF_SQL } from '../fx/repository';
-import { profileView, type ProfileRow } from '../profiles/repository';
+import { PROFILE_FIELDS, type ProfileRow } from '../profiles/repository';
+
+const PROFILE_COLUMNS = PROFILE_FIELDS.map((f) => `prof.${f.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)} AS "profile:${f}"`).join(', ');
 
 export interface BoardQuery {
   qty: number;
@@ -48,7 +50,8 @@ export async function offersForPart(deps: Deps, workspaceId: string, partId: str
  * turn for a connection): the part; the pivot currency, all the suppliers (tens, not
  * thousands) and the FX rates as of `date`; the part's quotes as the cost roll reads them;
  * and the profile asked for, or else the workspace's first. The profile's columns come
- * as columns, not JSON, so its decimals stay exact text.
+ * as columns, not JSON, so its decimals stay exact text; each is named "profile:<field>"
+ * (no underscore, so the camelCasing of result rows leaves the name as it is).
  */
 async function boardContext(db: DbOrTrx, workspaceId: string, partId: string, date: string, profileId: string | undefined) {
   const { rows } = (await db.raw(
@@ -56,14 +59,14 @@ async function boardContext(db: DbOrTrx, workspaceId: string, partId: string, da
             (SELECT coalesce(json_agg(json_build_object('id', s.id::text, 'active', s.active, 'name', s.name)), '[]') FROM suppliers s WHERE s.workspace_id = p.workspace_id) AS suppliers,
             (SELECT coalesce(json_agg(f), '[]') FROM (${RATES_AS_OF_SQL}) f) AS "fxRates",
             ARRAY(SELECT ${COSTING_QUOTE_TEXT_SQL} FROM quotes q WHERE q.workspace_id = p.workspace_id AND q.part_id = p.id ORDER BY q.id) AS "quoteTexts",
-            prof.*
+            ${PROFILE_COLUMNS}
        FROM parts p JOIN workspaces w ON w.id = p.workspace_id
        LEFT JOIN LATERAL (
          SELECT * FROM landed_cost_profiles l WHERE l.workspace_id = p.workspace_id AND (?::bigint IS NULL OR l.id = ?::bigint) ORDER BY l.id LIMIT 1
        ) prof ON true
       WHERE p.workspace_id = ? AND p.id = ?`,
     [workspaceId, date, profileId ?? null, profileId ?? null, workspaceId, partId],
-  )) as { rows: (ProfileRow & { partId: string; hsCode: string | null; pivot: string; suppliers: { id: string; active: boolean; name: string }[]; fxRates: (FxRate & { id: string })[]; quoteTexts: string[] })[] };
+  )) as { rows: (Record<string, unknown> & { partId: string; hsCode: string | null; pivot: string; suppliers: { id: string; active: boolean; name: string }[]; fxRates: (FxRate & { id: string })[]; quoteTexts: string[] })[] };
   const row = rows[0];
   if (!row) return undefined;
   return {
@@ -72,6 +75,6 @@ async function boardContext(db: DbOrTrx, workspaceId: string, partId: string, da
     suppliers: row.suppliers,
     fxRates: row.fxRates,
     quotes: row.quoteTexts.map(costingQuoteFromText),
-    profile: row.id == null ? undefined : profileView(row),
+    profile: row['profile:id'] == null ? undefined : (Object.fromEntries(PROFILE_FIELDS.map((f) => [f, row[`profile:${f}`]])) as unknown as ProfileRow),
   };
 }

@@ -165,13 +165,16 @@ describe('the quote board reads its profile', () => {
     const supplier = await makeSupplier(buyer.agent, { currency: 'USD', country: 'US' });
     const part = await makePart(buyer.agent, { hsCode: '8533.21' });
     await makeQuote(buyer.agent, part.id, supplier.id, { currency: 'USD', incoterm: 'FOB', priceBreaks: [{ minQty: 1, unitPrice: '0.0020' }] });
+    const none = (await buyer.agent.get(`/api/parts/${part.id}/offers`).query({ qty: 10000, currency: 'USD' }).expect(200)).body;
+    expect(none).toMatchObject({ profileId: null, profileName: null, dutyPct: '0' });
+    expect(none.offers[0]).toMatchObject({ goodsValue: '20.000000', duty: '0.000000', landed: '20.000000' });
     const first = await makeProfile(buyer.agent, { currency: 'USD', dutyBasis: 'FOB', defaultDutyPct: '0' });
     const second = await makeProfile(buyer.agent, { currency: 'USD', dutyBasis: 'FOB', defaultDutyPct: '10' });
     const board = async (query: Record<string, unknown>) => (await buyer.agent.get(`/api/parts/${part.id}/offers`).query({ qty: 10000, currency: 'USD', ...query }).expect(200)).body;
     const byDefault = await board({});
     const asked = await board({ profileId: second.id });
     expect(byDefault.profileId).toBe(first.id);
-    expect(asked.profileId).toBe(second.id);
+    expect(asked).toMatchObject({ profileId: second.id, profileName: expect.stringMatching(/^Profile /), dutyPct: '10' });
     // Under FOB the buyer pays the import duty (Incoterms 2020): 10 % of the FOB value of
     // 10,000 × USD 0.0020 = USD 20 is USD 2 with the second profile, nothing with the first.
     expect(byDefault.offers[0]).toMatchObject({ goodsValue: '20.000000', duty: '0.000000', landed: '20.000000' });

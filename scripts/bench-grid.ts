@@ -1,17 +1,20 @@
 /**
  * `npm run bench:grid`: the Lines grid of a 2,000-line BOM in Debian's Chromium, against
- * the app as `npm start` runs it. Measures how long the grid takes to open with every line
- * loaded, then scrolls it from top to bottom and back, a screenful-and-more per frame, and
- * jumps to random rows (as a dragged scrollbar does), recording every frame. Prints one JSON
- * line. A frame counts as a stutter when it took over 50 ms (the W3C Long Tasks threshold)
- * or showed no row in the middle of the grid (rows not drawn in time).
- * Targets (2-core machine, our own): opens in under 2 s (the median of five opens after the first); no stutter frames; 95% of frames
- * within 1/30 s.
+ * the app as `npm start` runs it. Times six opens with every line loaded (the first also
+ * loads the client and computes the BOM's first roll-up), then scrolls from top to bottom
+ * and back at BENCH_GRID_PX (200) px a frame, then jumps to 60 rows scattered over the grid
+ * (as a dragged scrollbar does), recording every frame. Prints one JSON line.
+ *
+ * Our targets (2-core machine; the issue names none): the median open after the first under
+ * 1 s; while sweeping, 95 % of frames within two 60 Hz frame times (33.4 ms; frame lengths
+ * come in whole frame times), at most 1 % over
+ * 50 ms (the W3C Long Tasks threshold), and no move that outruns the rows already drawn.
+ * Jumps redraw a whole screen and are reported, with no target.
  */
 import { existsSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 import { performance } from 'node:perf_hooks';
-import { chromium } from 'playwright-core';
+import { chromium, type Browser } from 'playwright-core';
 import { startBenchApp } from './lib/bench-app';
 import { ensureChromium } from './lib/chromium';
 
@@ -21,7 +24,7 @@ const jumps = 60;
 
 interface ScrollRecord {
   frames: number[];
-  blank: number;
+  outran: number;
   longTasks: number[];
 }
 
@@ -35,7 +38,8 @@ function summary(r: ScrollRecord) {
     p95FrameMs: Number(percentile(r.frames, 0.95).toFixed(1)),
     maxFrameMs: Number(Math.max(...r.frames).toFixed(1)),
     framesOver50Ms: stutters,
-    blankFrames: r.blank,
+    framesOver50MsPct: Number(((100 * stutters) / r.frames.length).toFixed(1)),
+    movesOutrunningDrawnRows: r.outran,
     longTasks: r.longTasks.length,
     longestTaskMs: r.longTasks.length ? Math.round(Math.max(...r.longTasks)) : 0,
   };
@@ -67,8 +71,9 @@ export async function benchGrid(lines = lineCount) {
     },
   });
 
-  const browser = await chromium.launch({ executablePath: chromiumPath, headless: true, args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'] });
+  let browser: Browser | undefined;
   try {
+    browser = await chromium.launch({ executablePath: chromiumPath, headless: true, args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking'] });
     const cookie = await app.signIn('designer@tinbell.example');
     const [name, value] = cookie.split('=');
     const context = await browser.newContext({ viewport: { width: 1360, height: 860 } });
@@ -91,45 +96,60 @@ export async function benchGrid(lines = lineCount) {
       let el = grid.parentElement!;
       while (el.scrollHeight <= el.clientHeight + 1 || getComputedStyle(el).overflowY === 'visible') el = el.parentElement!;
       const box = el.getBoundingClientRect();
-      const showsRow = () => Boolean(document.elementFromPoint(box.left + 120, box.top + box.height / 2)?.closest('[role="row"]'));
-      const record = async (move: (frame: number) => boolean) => {
+      const header = grid.querySelector('[role="row"][aria-rowindex="1"]')!.getBoundingClientRect().height;
+      /** Whether a line's row is drawn at height y of the viewport (not the header, not empty space). */
+      const rowAt = (y: number) => {
+        const row = document.elementFromPoint(box.left + 120, y)?.closest('[role="row"]');
+        return Boolean(row && row.getAttribute('aria-rowindex') !== '1');
+      };
+      // `move` sets the scroll position for the next frame and says whether to go on; it
+      // returns 'outran' when the rows already drawn did not reach where the view landed.
+      const record = async (move: (frame: number) => boolean | 'outran') => {
         const frames: number[] = [];
         const longTasks: number[] = [];
-        let blank = 0;
+        let outran = 0;
         const observer = new PerformanceObserver((list) => list.getEntries().forEach((e) => longTasks.push(e.duration)));
         observer.observe({ type: 'longtask' });
         await new Promise<void>((resolve) => {
           let last = 0;
           let n = 0;
-          // Scroll events run before animation-frame callbacks, so each check sees the rows
-          // drawn for the previous frame's scroll.
+          let done = false;
+          // Each frame's length is from its animation-frame callback to the next one; the
+          // frame after the last move is recorded too.
           const step = (now: number) => {
             if (last) frames.push(now - last);
             last = now;
-            if (n > 0 && !showsRow()) blank++;
-            if (move(n++)) requestAnimationFrame(step);
-            else resolve();
+            if (done) return resolve();
+            const going = move(n++);
+            if (going === 'outran') outran++;
+            done = going === false;
+            requestAnimationFrame(step);
           };
           requestAnimationFrame(step);
         });
         observer.disconnect();
-        return { frames, blank, longTasks };
+        return { frames, outran, longTasks };
       };
       const max = () => el.scrollHeight - el.clientHeight;
       let dir = 1;
       let turns = 0;
       const sweep = await record(() => {
         el.scrollTop = Math.max(0, Math.min(max(), el.scrollTop + dir * px));
+        // Checked at the leading edge right after the move, before the scroll event lets the
+        // grid draw new rows: what a scroll driven by the compositor (a wheel or a fling)
+        // would show for a frame if the page's own thread fell behind.
+        const covered = rowAt(dir === 1 ? box.bottom - 4 : box.top + header + 4);
         if ((dir === 1 && el.scrollTop >= max() - 1) || (dir === -1 && el.scrollTop <= 0)) {
           dir = -dir;
           turns++;
         }
-        return turns < 2;
+        return turns >= 2 ? false : covered ? true : 'outran';
       });
-      // Jumps to rows spread over the grid in a fixed scattered order (a dragged scrollbar).
+      // Jumps to rows spread over the grid in a fixed scattered order (a dragged scrollbar);
+      // none lands on the first row, where the sweep ended.
       const jump = await record((frame) => {
-        el.scrollTop = Math.round(((frame * 37) % jumpCount) / jumpCount * max());
-        return frame < jumpCount;
+        el.scrollTop = Math.round((((frame * 37) % jumpCount) + 0.5) / jumpCount * max());
+        return frame < jumpCount - 1;
       });
       return { sweep, jump, scrollHeightPx: el.scrollHeight };
     }, { px: pxPerFrame, jumpCount: jumps });
@@ -144,7 +164,7 @@ export async function benchGrid(lines = lineCount) {
     console.log(JSON.stringify(result));
     return result;
   } finally {
-    await browser.close();
+    await browser?.close();
     await app.stop();
   }
 }

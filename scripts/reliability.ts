@@ -57,13 +57,14 @@ let load = '';
 if (existsSync('.data/bench-load.json')) {
   const b = JSON.parse(readFileSync('.data/bench-load.json', 'utf8')) as {
     date: string;
+    warmUp?: { seconds: number } | null;
     results: { run: number; seconds: number; connections: number; throughputPerSec: number; errors: number; serverRssMb: number; routes: { route: string; p50Ms: number; p99Ms: number; throughputPerSec: number; errors: number }[] }[];
   };
   const [first, last] = [b.results[0], b.results[b.results.length - 1]];
   const firstP99 = new Map(first.routes.map((x) => [x.route, x.p99Ms]));
   load = [
     '',
-    `Load (\`npm run bench:load\`, ${b.date}: ${last.connections} connections, a 5 s warm-up not counted, then two runs of ${last.seconds} s; req/s and p50 of the second run):`,
+    `Load (\`npm run bench:load\`, ${b.date}: ${last.connections} connections, ${b.warmUp ? `a ${b.warmUp.seconds} s warm-up not counted` : 'no warm-up'}, then two runs of ${last.seconds} s; req/s and p50 of the second run):`,
     '',
     '| route | req/s | p50 (ms) | p99 run 1 (ms) | p99 run 2 (ms) | errors (both runs) |',
     '|---|---|---|---|---|---|',

@@ -25,10 +25,17 @@ export interface BenchApp {
 
 /**
  * Makes `database` afresh with the demo data, lets `prepare` add to it, then starts the
- * server on it. Should the calling script die early, the server and the cluster go too.
+ * server on it. Should the calling script die or fail at any point, the server and the
+ * cluster go too.
  */
 export async function startBenchApp(opts: { database: string; port: number; env?: Record<string, string>; prepare?: (db: Db) => Promise<void> }): Promise<BenchApp> {
   const cluster = prepareDatabase({ folder: 'pg-test', port: Number(process.env.FARTHING_TEST_PG_PORT ?? 54339), database: 'postgres', log: (s) => console.error(s) });
+  const running: { server?: ChildProcess } = {};
+  process.once('exit', () => {
+    running.server?.kill('SIGKILL');
+    cluster.stop();
+  });
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGPIPE'] as const) process.once(signal, () => process.exit(130));
   const admin = createDb(cluster.url);
   await admin.raw(`DROP DATABASE IF EXISTS ${opts.database} WITH (FORCE)`);
   await admin.raw(`CREATE DATABASE ${opts.database}`);
@@ -48,28 +55,24 @@ export async function startBenchApp(opts: { database: string; port: number; env?
   const s3 = await startS3Fake({ directory: `.data/s3-${opts.database}`, bucket: 'farthing' });
   // LOAD_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=.data/profiles", profiles the server.
   const nodeArgs = (process.env.LOAD_NODE_ARGS ?? '').split(' ').filter(Boolean);
-  const server = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
+  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
     env: {
       ...process.env, NODE_ENV: 'production', DATABASE_URL: url, PORT: String(opts.port), PUBLIC_URL: base, SESSION_SECRET: 'bench-secret-0123456789',
       SMTP_PORT: String(sink.smtpPort), S3_ENDPOINT: `http://127.0.0.1:${s3.port}`, SERVE_CLIENT: 'false', LOG_LEVEL: 'error', RATE_LIMIT_AUTH_PER_MINUTE: '1000', ...opts.env,
     },
     stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
   });
-  process.once('exit', () => {
-    server.kill('SIGKILL');
-    cluster.stop();
-  });
-  for (const signal of ['SIGINT', 'SIGTERM', 'SIGPIPE'] as const) process.once(signal, () => process.exit(130));
+  running.server = child;
   await new Promise<void>((resolve, reject) => {
-    server.once('message', () => resolve());
-    server.once('exit', (c) => reject(new Error(`server exited ${c}`)));
+    child.once('message', () => resolve());
+    child.once('exit', (c) => reject(new Error(`server exited ${c}`)));
   });
 
   const rssOf = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, 'utf8'))![1]) / 1024;
   const childrenOf = (pid: number) => readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
   return {
     base,
-    server,
+    server: child,
     signIn: async (email) => {
       const login = await fetch(`${base}/api/auth/login`, {
         method: 'POST', headers: { 'content-type': 'application/json', 'x-requested-with': 'farthing' }, body: JSON.stringify({ email, password: demoPassword }),
@@ -77,11 +80,14 @@ export async function startBenchApp(opts: { database: string; port: number; env?
       if (login.status !== 200) throw new Error(`sign-in as ${email} answered ${login.status}`);
       return (login.headers.get('set-cookie') ?? '').split(';')[0];
     },
-    rssMb: () => [server.pid!, ...childrenOf(server.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0),
-    processes: () => childrenOf(server.pid!).length || 1,
+    rssMb: () => [child.pid!, ...childrenOf(child.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0),
+    processes: () => childrenOf(child.pid!).length || 1,
     stop: async () => {
-      server.kill('SIGTERM');
-      await new Promise((r) => server.once('exit', r));
+      if (child.exitCode === null && child.signalCode === null) {
+        const exited = new Promise((r) => child.once('exit', r));
+        child.kill('SIGTERM');
+        await exited;
+      }
       await sink.close();
       await s3.close();
       cluster.stop();

@@ -7,8 +7,8 @@
  *
  * Our targets (2-core machine; the issue names none): the median open after the first under
  * 1 s; while sweeping, 95 % of frames within two 60 Hz frame times (33.4 ms; frame lengths
- * come in whole frame times), at most 1 % over
- * 50 ms (the W3C Long Tasks threshold), and no move that outruns the rows already drawn.
+ * come in whole frame times), at most 1 % over 50 ms (the W3C Long Tasks threshold), and no
+ * move that outruns the rows already drawn.
  * Jumps redraw a whole screen and are reported, with no target.
  */
 import { existsSync } from 'node:fs';

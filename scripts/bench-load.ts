@@ -41,19 +41,44 @@ async function main() {
     const headers = { cookie, 'x-requested-with': 'farthing', 'content-type': 'application/json', 'accept-encoding': 'gzip, deflate, br' };
     const versions = new Map<string, number>(lineIds.map((id) => [id, 1]));
     let nextLine = 0;
+    // Second-page reads that did not end the list: a sign the pages were not read in turn.
+    let lastPageMissed = 0;
+    // autocannon drops the edits in flight when a run ends; the server may have saved them,
+    // so before each run the versions are read back as a client that lost track would.
+    const refreshVersions = async () => {
+      let cursor: string | null = null;
+      do {
+        const res = await fetch(`${base}/api/boms/${bomId}/lines?limit=5000${cursor ? `&cursor=${cursor}` : ''}`, { headers: { cookie, 'x-requested-with': 'farthing' } });
+        const page = (await res.json()) as { items: { id: string; version: number }[]; nextCursor: string | null };
+        for (const l of page.items) versions.set(l.id, l.version);
+        cursor = page.nextCursor;
+      } while (cursor);
+    };
     const routes: { name: string; share: number; opts: Partial<autocannon.Options> }[] = [
       { name: 'GET /api/boms', share: 10, opts: { url: `${base}/api/boms` } },
       {
         // As the grid reads them: page after page (500 lines each), then from the start again.
         name: 'GET /api/boms/:id/lines', share: 9,
         opts: {
-          requests: [{
-            method: 'GET',
-            setupRequest: (req: Record<string, unknown>, context: Record<string, unknown>) => ({ ...req, path: `/api/boms/${bomId}/lines${context.cursor ? `?cursor=${context.cursor as string}` : ''}` }),
-            onResponse: (status: number, body: string, context: Record<string, unknown>) => {
-              context.cursor = status === 200 ? /"nextCursor":"([^"]+)"\}$/.exec(body.slice(-80))?.[1] : undefined;
+          // autocannon gives each connection a fresh context every time it starts the list
+          // again, so the two pages are two requests of one list: the first page's cursor
+          // is in the context when the second is made.
+          requests: [
+            {
+              method: 'GET',
+              path: `/api/boms/${bomId}/lines`,
+              onResponse: (status: number, body: string, context: Record<string, unknown>) => {
+                context.cursor = status === 200 ? /"nextCursor":"([^"]+)"\}$/.exec(body.slice(-80))?.[1] : undefined;
+              },
             },
-          }] as unknown as autocannon.Request[],
+            {
+              method: 'GET',
+              setupRequest: (req: Record<string, unknown>, context: Record<string, unknown>) => ({ ...req, path: `/api/boms/${bomId}/lines${context.cursor ? `?cursor=${context.cursor as string}` : ''}` }),
+              onResponse: (status: number, body: string) => {
+                if (status === 200 && !body.endsWith('"nextCursor":null}')) lastPageMissed++;
+              },
+            },
+          ] as unknown as autocannon.Request[],
         },
       },
       { name: 'GET /api/boms/:id/cost', share: 9, opts: { url: `${base}/api/boms/${bomId}/cost` } },
@@ -64,10 +89,10 @@ async function main() {
         opts: {
           requests: [{
             method: 'PATCH',
-            // Each connection edits a line of its own, so edits never race on a version.
-            setupRequest: (req: Record<string, unknown>, context: Record<string, unknown>) => {
-              context.line ??= lineIds[nextLine++ % lineIds.length];
-              const id = context.line as string;
+            // Each edit takes the next line in turn: an edit of a line comes a thousand edits
+            // after the last, so edits never race on a version.
+            setupRequest: (req: Record<string, unknown>) => {
+              const id = lineIds[nextLine++ % lineIds.length];
               return { ...req, path: `/api/boms/${bomId}/lines/${id}`, body: JSON.stringify({ note: `edit ${Date.now()}`, version: versions.get(id) }) };
             },
             onResponse: (status: number, body: string) => {
@@ -90,6 +115,8 @@ async function main() {
           autocannon({ url: base, connections: r.share, duration, headers, ...r.opts } as autocannon.Options).then((o) => ({
             route: r.name, connections: r.share, requests: o.requests.total, throughputPerSec: Math.round(o.requests.average),
             p50Ms: o.latency.p50, p99Ms: o.latency.p99, errors: o.errors + o.timeouts + o.non2xx,
+            // What the errors were: connection errors, timeouts, 4xx and 5xx answers.
+            errorKinds: { connection: o.errors, timeouts: o.timeouts, '4xx': o['4xx'], '5xx': o['5xx'] }, statusCodes: (o as unknown as { statusCodeStats?: Record<string, { count: number }> }).statusCodeStats,
           })),
         ),
       );
@@ -100,10 +127,14 @@ async function main() {
     let warmUp: unknown = null;
     if (warmUpSeconds > 0) {
       const outs = await drive(warmUpSeconds);
+      // Edits cut off when the warm-up ended may still be committing: let them finish.
+      await new Promise((r) => setTimeout(r, 3000));
       warmUp = { run: 'warm-up', seconds: warmUpSeconds, errors: outs.reduce((n, o) => n + o.errors, 0), routes: outs.map((o) => ({ route: o.route, p50Ms: o.p50Ms, p99Ms: o.p99Ms, errors: o.errors })) };
       console.log(JSON.stringify(warmUp));
     }
     for (const run of [1, 2]) {
+      await refreshVersions();
+      lastPageMissed = 0;
       const outs = await drive(seconds);
       // The memory after the load has settled (V8 shrinks the heap some seconds after the
       // server goes idle), so two runs compare like with like rather than wherever a
@@ -112,7 +143,7 @@ async function main() {
       const summary = {
         run, seconds, connections, totalRequests: outs.reduce((n, o) => n + o.requests, 0),
         throughputPerSec: outs.reduce((n, o) => n + o.throughputPerSec, 0), errors: outs.reduce((n, o) => n + o.errors, 0),
-        serverRssMb: Math.round(app.rssMb()), serverProcesses: app.processes(), routes: outs,
+        serverRssMb: Math.round(app.rssMb()), serverProcesses: app.processes(), linesSecondPagesNotLast: lastPageMissed, routes: outs,
       };
       console.log(JSON.stringify(summary));
       results.push(summary);

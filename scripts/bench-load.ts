@@ -108,6 +108,9 @@ async function main() {
     // LOAD_ONLY="GET /api/boms" drives one route alone (to see what each costs).
     const only = process.env.LOAD_ONLY;
     if (only) routes.splice(0, routes.length, ...routes.filter((r) => r.name === only).map((r) => ({ ...r, share: connections })));
+    // LOAD_SKIP="PATCH /api/boms/:id/lines/:lineId" leaves one route out (its connections idle).
+    const skip = process.env.LOAD_SKIP;
+    if (skip) routes.splice(0, routes.length, ...routes.filter((r) => r.name !== skip));
     const results: unknown[] = [];
     const drive = (duration: number) =>
       Promise.all(

@@ -54,7 +54,9 @@ export function createApp(opts: AppOptions): FarthingApp {
       redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]', '*.password', '*.token'], censor: '[hidden]' },
     });
   const queue = createJobQueue(config.DATABASE_URL, logger);
-  const outbox = createOutbox(queue, opts.mailer ?? createMailer(config), logger, { work: config.MAIL_WORKER, pollingIntervalSeconds: config.JOB_POLL_SECONDS });
+  // A web-only process leaves the background jobs to a jobs process (see server/index.ts).
+  const runsJobs = config.PROCESS_ROLE !== 'web';
+  const outbox = createOutbox(queue, opts.mailer ?? createMailer(config), logger, { work: config.MAIL_WORKER && runsJobs, pollingIntervalSeconds: config.JOB_POLL_SECONDS });
   const mailer = outbox;
   const store =
     opts.store ??
@@ -115,7 +117,7 @@ export function createApp(opts: AppOptions): FarthingApp {
   return {
     app,
     deps,
-    ready: Promise.all([outbox.started, startRollupWorker(deps)]).then(() => undefined),
+    ready: Promise.all([outbox.started, startRollupWorker(deps, runsJobs)]).then(() => undefined),
     queue,
     close: async () => {
       await queue.stop();

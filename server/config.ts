@@ -36,6 +36,12 @@ const schema = z.object({
   MAX_IMPORT_MB: z.coerce.number().min(1).max(200).default(10),
   /** Server processes on this machine; default one per core in production, else one. */
   WEB_CONCURRENCY: z.coerce.number().int().min(1).max(64).optional(),
+  /**
+   * What this process does: `all` serves HTTP and runs the background jobs (roll-up refresh,
+   * mail); `web` only serves HTTP; `jobs` only runs the jobs. With more than one process,
+   * `npm start` runs that many web processes and one jobs process.
+   */
+  PROCESS_ROLE: z.enum(['all', 'web', 'jobs']).default('all'),
 });
 
 export type Config = z.infer<typeof schema>;

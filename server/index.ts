@@ -5,13 +5,17 @@ import { createDb } from './db/knex';
 import { createApp } from './app';
 
 /**
- * Starts the app: one stateless server process per core in production, up to four
- * (WEB_CONCURRENCY sets the number), sharing the port through node:cluster. Nothing lives in a process,
- * so any of them answers any request, as separate machines would.
+ * Starts the app. In production, one stateless web process per core, up to four
+ * (WEB_CONCURRENCY sets the number), sharing the port through node:cluster, and one jobs
+ * process that refreshes stored cost roll-ups and sends mail: a roll-up of a large BOM takes
+ * a few hundred milliseconds of CPU, which in a web process would hold up every request
+ * queued behind it. Nothing lives in a process, so any web process answers any request, as
+ * separate machines would. A single process (development, tests) does both.
  */
 const config = loadConfig();
 // At most four by default: each process opens up to 19 PostgreSQL connections (pools of
-// 10 for queries, 5 for sessions, 4 for jobs), and PostgreSQL's own default is 100.
+// 10 for queries, 5 for sessions, 4 for jobs), and PostgreSQL's own default is 100; four
+// web processes and the jobs process make 95.
 const processes = config.WEB_CONCURRENCY ?? (config.NODE_ENV === 'production' ? Math.min(availableParallelism(), 4) : 1);
 
 if (processes > 1 && cluster.isPrimary) runPrimary(processes);
@@ -19,20 +23,31 @@ else runServer();
 
 function runServer() {
   const db = createDb(config.DATABASE_URL);
-  const { app, deps, close } = createApp({ db, config });
+  const { app, deps, ready, close } = createApp({ db, config });
 
-  const server = app.listen(config.PORT, config.HOST, () => {
-    deps.logger.info({ url: config.PUBLIC_URL, port: config.PORT, pid: process.pid }, 'Farthing is listening');
-    process.send?.({ ready: true, port: config.PORT });
-  });
+  const server =
+    config.PROCESS_ROLE === 'jobs'
+      ? null
+      : app.listen(config.PORT, config.HOST, () => {
+          deps.logger.info({ url: config.PUBLIC_URL, port: config.PORT, pid: process.pid }, 'Farthing is listening');
+          process.send?.({ ready: true, port: config.PORT });
+        });
+  if (!server) {
+    void ready
+      .then(
+        () => deps.logger.info({ pid: process.pid }, 'Farthing background jobs are running'),
+        (err) => deps.logger.error({ err }, 'background jobs did not start'),
+      )
+      .then(() => process.send?.({ ready: true, jobs: true }));
+  }
 
   let stopping = false;
   async function stop(signal: string) {
     if (stopping) return;
     stopping = true;
     deps.logger.info({ signal }, 'stopping');
-    server.close();
-    server.closeAllConnections();
+    server?.close();
+    server?.closeAllConnections();
     await close().catch(() => undefined);
     await db.destroy().catch(() => undefined);
     process.exit(0);
@@ -43,20 +58,27 @@ function runServer() {
   process.on('unhandledRejection', (err) => deps.logger.error({ err }, 'unhandled rejection'));
 }
 
-/** Forks the servers, says ready when all listen, replaces one that dies, and stops them all. */
+/** Forks the processes, says ready when all are up, replaces one that dies, and stops them all. */
 function runPrimary(n: number) {
-  let listening = 0;
+  let up = 0;
+  let port: number | undefined;
   let stopping = false;
   let deaths: number[] = [];
   const log = (s: string) => config.LOG_LEVEL !== 'silent' && console.error(`[farthing] ${s}`);
-  for (let i = 0; i < n; i++) cluster.fork();
+  const roles = new Map<number, 'web' | 'jobs'>();
+  const fork = (role: 'web' | 'jobs') => roles.set(cluster.fork({ PROCESS_ROLE: role }).id, role);
+  for (let i = 0; i < n; i++) fork('web');
+  fork('jobs');
+  const total = n + 1;
   cluster.on('message', (_worker, message: { ready?: boolean; port?: number }) => {
-    if (message?.ready && ++listening === n) process.send?.({ ready: true, port: message.port, processes: n });
+    if (!message?.ready) return;
+    port ??= message.port;
+    if (++up === total) process.send?.({ ready: true, port, processes: n, jobsProcesses: 1 });
   });
   cluster.on('exit', (worker, code, signal) => {
     if (stopping) return;
     // One that dies before all are up is a start-up fault (a bad setting, a taken port): stop.
-    if (listening < n) {
+    if (up < total) {
       log(`a server process exited (${signal ?? code}) while starting`);
       void stop(1);
       return;
@@ -69,8 +91,10 @@ function runPrimary(n: number) {
       void stop(1);
       return;
     }
-    log(`server process ${worker.process.pid} exited (${signal ?? code}); starting another`);
-    cluster.fork();
+    const role = roles.get(worker.id) ?? 'web';
+    roles.delete(worker.id);
+    log(`${role === 'jobs' ? 'jobs' : 'server'} process ${worker.process.pid} exited (${signal ?? code}); starting another`);
+    fork(role);
   });
   async function stop(code = 0) {
     if (stopping) return;

@@ -110,12 +110,12 @@ describe('two servers side by side', () => {
     await expect.poll(onB, { timeout: 10_000 }).toBe('0.0070000000');
   });
 
-  it('one per core: a server started with WEB_CONCURRENCY=2 on a new database starts cleanly, runs two processes on one port, replaces one that dies, and stops them all', async () => {
+  it('one per core: with WEB_CONCURRENCY=2 on a new database it starts cleanly, runs two web processes and a jobs process, replaces one that dies, and stops them all', async () => {
     const port = await freePort();
-    // A database no server has started on: both processes set up the job queues at once.
+    // A database no server has started on: every process sets up the job queues at once.
     const fresh = await createTestDatabase();
     const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-      env: { ...process.env, ...env, DATABASE_URL: fresh.url, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'error', SERVE_CLIENT: 'false' },
+      env: { ...process.env, ...env, DATABASE_URL: fresh.url, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false' },
       stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
     });
     let logged = '';
@@ -123,23 +123,49 @@ describe('two servers side by side', () => {
     proc.stderr!.on('data', (d: Buffer) => (logged += d.toString()));
     const url = `http://127.0.0.1:${port}`;
     const children = () => readFileSync(`/proc/${proc.pid}/task/${proc.pid}/children`, 'utf8').split(' ').filter(Boolean).map(Number);
+    const jobsPid = () => Number([...logged.matchAll(/"pid":(\d+)[^\n]*background jobs are running/g)].at(-1)?.[1]);
     try {
-      const ready = await new Promise<{ processes: number }>((resolve, reject) => {
-        proc.once('message', (m) => resolve(m as { processes: number }));
+      const ready = await new Promise<{ processes: number; jobsProcesses: number }>((resolve, reject) => {
+        proc.once('message', (m) => resolve(m as { processes: number; jobsProcesses: number }));
         proc.once('exit', (code) => reject(new Error(`server exited ${code}`)));
       });
-      expect(ready.processes).toBe(2);
+      expect(ready).toMatchObject({ processes: 2, jobsProcesses: 1 });
       const first = children();
-      expect(first).toHaveLength(2);
+      expect(first).toHaveLength(3);
+      // The log lines may reach us a moment after the ready message.
+      await expect.poll(() => first.includes(jobsPid()), { timeout: 5_000 }).toBe(true);
+      await expect.poll(() => logged.match(/Farthing is listening/g)?.length, { timeout: 5_000 }).toBe(2);
       await request(url).get('/api/auth/me').expect(401);
-      process.kill(first[0], 'SIGKILL');
-      await expect.poll(() => children().filter((pid) => pid !== first[0]).length, { timeout: 15_000 }).toBe(2);
+
+      // The web processes queue roll-up refreshes; only the jobs process does them, so a
+      // fresh figure after an edit shows the jobs process at work, and after its replacement.
+      const signup = await request(url).post('/api/auth/signup').set('X-Requested-With', 'farthing')
+        .send({ email: 'cluster@tinbell.example', password: 'cluster test pw', name: 'Cluster', workspaceName: 'Cluster Co' }).expect(201);
+      const cookie = signup.headers['set-cookie'][0].split(';')[0];
+      const call = (method: 'post' | 'patch' | 'get', p: string, body?: object) => request(url)[method](p).set('Cookie', cookie).set('X-Requested-With', 'farthing').send(body);
+      const supplier = (await call('post', '/api/suppliers', { name: 'Cluster supplier', country: 'US', currency: 'USD', defaultIncoterm: 'DDP' }).expect(201)).body;
+      const part = (await call('post', '/api/parts', { internalPn: 'CL-R', category: 'resistor', ratings: {} }).expect(201)).body;
+      let quote = (await call('post', '/api/quotes', { partId: part.id, supplierId: supplier.id, currency: 'USD', incoterm: 'DDP', priceBreaks: [{ minQty: 1, unitPrice: '0.0100' }] }).expect(201)).body;
+      const bom = (await call('post', '/api/boms', { name: 'Cluster BOM', reportingCurrency: 'USD', plannedQty: 1000 }).expect(201)).body;
+      await call('post', `/api/boms/${bom.id}/lines`, { partId: part.id, qtyPerUnit: '1' }).expect(201);
+      const listed = async () => (await call('get', '/api/boms').expect(200)).body.items.find((x: { id: string }) => x.id === bom.id).cost;
+      await expect.poll(async () => (await listed()).landedPerUnit, { timeout: 10_000 }).toBe('0.0100000000');
+      quote = (await call('patch', `/api/quotes/${quote.id}`, { version: quote.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0070' }] }).expect(200)).body;
+      await expect.poll(async () => { const c = await listed(); return c.fresh && c.landedPerUnit; }, { timeout: 10_000 }).toBe('0.0070000000');
+
+      const jobs = jobsPid();
+      process.kill(jobs, 'SIGKILL');
+      await expect.poll(() => children().filter((pid) => pid !== jobs).length, { timeout: 15_000 }).toBe(3);
+      await expect.poll(() => jobsPid() !== jobs, { timeout: 15_000 }).toBe(true);
       for (let i = 0; i < 6; i++) await request(url).get('/api/auth/me').expect(401);
+      await call('patch', `/api/quotes/${quote.id}`, { version: quote.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0050' }] }).expect(200);
+      await expect.poll(async () => { const c = await listed(); return c.fresh && c.landedPerUnit; }, { timeout: 15_000 }).toBe('0.0050000000');
+
       // Both queues exist once, and no process logged an error while they were made.
       const queues = await fresh.db.raw(`SELECT name FROM pgboss.queue ORDER BY name`);
       expect(queues.rows.map((q: { name: string }) => q.name)).toEqual(['cost-rollup', 'mail']);
       expect(logged).not.toMatch(/"level":(50|60)|deadlock|unhandled|did not start/);
-      expect(logged).toMatch(/exited \(SIGKILL\); starting another/);
+      expect(logged).toMatch(/jobs process \d+ exited \(SIGKILL\); starting another/);
     } finally {
       const all = children();
       proc.kill('SIGTERM');

@@ -30,7 +30,7 @@ const schema = z.object({
   /** Points the official SDK at our local fake; unset with real keys. */
   STRIPE_API_URL: z.string().url().optional(),
   BILLING_GRACE_DAYS: z.coerce.number().int().min(0).max(60).default(7),
-  /** Whether this server also runs the mail worker (every server may; each mail goes once). */
+  /** Whether this server also runs the mail worker (every server may; each mail goes once). A web-only process never does. */
   MAIL_WORKER: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
   JOB_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(1),
   MAX_IMPORT_MB: z.coerce.number().min(1).max(200).default(10),
@@ -38,8 +38,9 @@ const schema = z.object({
   WEB_CONCURRENCY: z.coerce.number().int().min(1).max(64).optional(),
   /**
    * What this process does: `all` serves HTTP and runs the background jobs (roll-up refresh,
-   * mail); `web` only serves HTTP; `jobs` only runs the jobs. With more than one process,
-   * `npm start` runs that many web processes and one jobs process.
+   * mail); `web` only serves HTTP; `jobs` only runs the jobs. With more than one process and
+   * no role set, `npm start` runs that many web processes and one jobs process; set to `web`,
+   * web processes only (the jobs then run on another machine); set to `jobs`, one jobs process.
    */
   PROCESS_ROLE: z.enum(['all', 'web', 'jobs']).default('all'),
 });

@@ -18,7 +18,10 @@ const config = loadConfig();
 // web processes and the jobs process make 95.
 const processes = config.WEB_CONCURRENCY ?? (config.NODE_ENV === 'production' ? Math.min(availableParallelism(), 4) : 1);
 
-if (processes > 1 && cluster.isPrimary) runPrimary(processes);
+// PROCESS_ROLE set by hand: `web` runs that many web processes and no jobs process (the
+// jobs run elsewhere); `jobs` runs one jobs process. Unset, several processes split as above.
+const askedRole = process.env.PROCESS_ROLE;
+if (processes > 1 && askedRole !== 'jobs' && cluster.isPrimary) runPrimary(processes, askedRole === 'web' ? 0 : 1);
 else runServer();
 
 function runServer() {
@@ -33,12 +36,18 @@ function runServer() {
           process.send?.({ ready: true, port: config.PORT });
         });
   if (!server) {
-    void ready
-      .then(
-        () => deps.logger.info({ pid: process.pid }, 'Farthing background jobs are running'),
-        (err) => deps.logger.error({ err }, 'background jobs did not start'),
-      )
-      .then(() => process.send?.({ ready: true, jobs: true }));
+    // A jobs process that cannot start its workers exits, so that it is replaced (or, at
+    // start-up, so that everything stops) rather than lingering with no job taken.
+    void ready.then(
+      () => {
+        deps.logger.info({ pid: process.pid }, 'Farthing background jobs are running');
+        process.send?.({ ready: true, jobs: true });
+      },
+      (err) => {
+        deps.logger.error({ err }, 'background jobs did not start');
+        process.exit(1);
+      },
+    );
   }
 
   let stopping = false;
@@ -59,7 +68,7 @@ function runServer() {
 }
 
 /** Forks the processes, says ready when all are up, replaces one that dies, and stops them all. */
-function runPrimary(n: number) {
+function runPrimary(n: number, jobsProcesses: number) {
   let up = 0;
   let port: number | undefined;
   let stopping = false;
@@ -68,12 +77,12 @@ function runPrimary(n: number) {
   const roles = new Map<number, 'web' | 'jobs'>();
   const fork = (role: 'web' | 'jobs') => roles.set(cluster.fork({ PROCESS_ROLE: role }).id, role);
   for (let i = 0; i < n; i++) fork('web');
-  fork('jobs');
-  const total = n + 1;
+  for (let i = 0; i < jobsProcesses; i++) fork('jobs');
+  const total = n + jobsProcesses;
   cluster.on('message', (_worker, message: { ready?: boolean; port?: number }) => {
     if (!message?.ready) return;
     port ??= message.port;
-    if (++up === total) process.send?.({ ready: true, port, processes: n, jobsProcesses: 1 });
+    if (++up === total) process.send?.({ ready: true, port, processes: n, jobsProcesses });
   });
   cluster.on('exit', (worker, code, signal) => {
     if (stopping) return;

@@ -115,7 +115,7 @@ describe('two servers side by side', () => {
     // A database no server has started on: every process sets up the job queues at once.
     const fresh = await createTestDatabase();
     const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-      env: { ...process.env, ...env, DATABASE_URL: fresh.url, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false' },
+      env: { ...process.env, ...env, DATABASE_URL: fresh.url, WEB_CONCURRENCY: '2', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'debug', SERVE_CLIENT: 'false' },
       stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
     });
     let logged = '';
@@ -160,6 +160,16 @@ describe('two servers side by side', () => {
       for (let i = 0; i < 6; i++) await request(url).get('/api/auth/me').expect(401);
       await call('patch', `/api/quotes/${quote.id}`, { version: quote.version, priceBreaks: [{ minQty: 1, unitPrice: '0.0050' }] }).expect(200);
       await expect.poll(async () => { const c = await listed(); return c.fresh && c.landedPerUnit; }, { timeout: 15_000 }).toBe('0.0050000000');
+
+      // Every refresh was done by a jobs process (the first or its replacement), none by a web
+      // process (debug log lines carry the pid of the process that wrote them).
+      const pidsOf = (msg: string) => [...logged.matchAll(new RegExp(`"pid":(\\d+)[^\\n]*"msg":"${msg}"`, 'g'))].map((m) => Number(m[1]));
+      const refreshers = [...new Set(pidsOf('cost roll-ups refreshed'))];
+      const web = pidsOf('Farthing is listening');
+      expect(web).toHaveLength(2);
+      expect(refreshers.length).toBeGreaterThan(0);
+      expect(refreshers.filter((pid) => web.includes(pid))).toEqual([]);
+      expect(refreshers.every((pid) => pidsOf('Farthing background jobs are running').includes(pid))).toBe(true);
 
       // Both queues exist once, and no process logged an error while they were made.
       const queues = await fresh.db.raw(`SELECT name FROM pgboss.queue ORDER BY name`);

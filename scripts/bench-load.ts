@@ -49,6 +49,7 @@ async function main() {
       let cursor: string | null = null;
       do {
         const res = await fetch(`${base}/api/boms/${bomId}/lines?limit=5000${cursor ? `&cursor=${cursor}` : ''}`, { headers: { cookie, 'x-requested-with': 'farthing' } });
+        if (!res.ok) throw new Error(`reading the lines back answered ${res.status}`);
         const page = (await res.json()) as { items: { id: string; version: number }[]; nextCursor: string | null };
         for (const l of page.items) versions.set(l.id, l.version);
         cursor = page.nextCursor;

@@ -110,6 +110,29 @@ describe('two servers side by side', () => {
     await expect.poll(onB, { timeout: 10_000 }).toBe('0.0070000000');
   });
 
+  it('PROCESS_ROLE=web under several processes runs web processes only (the jobs run elsewhere)', async () => {
+    const port = await freePort();
+    const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PROCESS_ROLE: 'web', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false' },
+      stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
+    });
+    let logged = '';
+    proc.stdout!.on('data', (d: Buffer) => (logged += d.toString()));
+    try {
+      const ready = await new Promise<{ processes: number; jobsProcesses: number }>((resolve, reject) => {
+        proc.once('message', (m) => resolve(m as { processes: number; jobsProcesses: number }));
+        proc.once('exit', (code) => reject(new Error(`server exited ${code}`)));
+      });
+      expect(ready).toMatchObject({ processes: 2, jobsProcesses: 0 });
+      expect(readFileSync(`/proc/${proc.pid}/task/${proc.pid}/children`, 'utf8').split(' ').filter(Boolean)).toHaveLength(2);
+      await request(`http://127.0.0.1:${port}`).get('/api/auth/me').expect(401);
+      expect(logged).not.toMatch(/background jobs are running/);
+    } finally {
+      proc.kill('SIGTERM');
+      await new Promise((r) => proc.once('exit', r));
+    }
+  }, 30_000);
+
   it('one per core: with WEB_CONCURRENCY=2 on a new database it starts cleanly, runs two web processes and a jobs process, replaces one that dies, and stops them all', async () => {
     const port = await freePort();
     // A database no server has started on: every process sets up the job queues at once.

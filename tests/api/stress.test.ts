@@ -44,8 +44,11 @@ describe('the stress check', () => {
     const cap = res.body.lines.find((l: { lineId: string }) => l.lineId === capLine.id);
     expect(cap.status).toBe('beyond_policy');
     expect(cap.checks[0]).toMatchObject({ check: 'capacitor.voltage', applied: 1500, rated: 2000, ratio: 0.75, limit: 0.7, status: 'beyond_policy' });
-    const list = (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bomId);
-    expect(list.stress).toEqual({ clear: 0, close: 1, beyondPolicy: 1, overRating: 0, needsData: 0 });
+    // The BOM list never waits for a recompute: it shows the stored tally, and the refresh
+    // queued by the last line added lands shortly.
+    const listed = async () => (await ws.agents.viewer.get('/api/boms').expect(200)).body.items.find((b: { id: string }) => b.id === bomId);
+    await expect.poll(async () => (await listed()).cost.fresh, { timeout: 10_000 }).toBe(true);
+    expect((await listed()).stress).toEqual({ clear: 0, close: 1, beyondPolicy: 1, overRating: 0, needsData: 0 });
   });
 
   it('the check stored with the roll-up answers as the live one, with waivers read at request time', async () => {

@@ -5,7 +5,7 @@ import pg from 'pg';
 // already arrive as strings, which keeps money exact and ids opaque.
 pg.types.setTypeParser(1082, (v: string) => v);
 
-const camelToSnake = (s: string) => s.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
+export const camelToSnake = (s: string) => s.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 // Column names are few and repeat on every row: each is converted once (a 10,000-line cost
 // roll brings back some 800,000 values).
 const camelNames = new Map<string, string>();

@@ -1,12 +1,12 @@
 import type { Deps } from '../deps';
 import { errors } from '../http/errors';
-import type { DbOrTrx } from '../db/knex';
+import { camelToSnake, type DbOrTrx } from '../db/knex';
 import { quoteBoard, CostingInputError, type FxRate } from '../costing';
 import { COSTING_QUOTE_TEXT_SQL, costingQuoteFromText, today } from './repository';
 import { RATES_AS_OF_SQL } from '../fx/repository';
 import { PROFILE_FIELDS, type ProfileRow } from '../profiles/repository';
 
-const PROFILE_COLUMNS = PROFILE_FIELDS.map((f) => `prof.${f.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`)} AS "profile:${f}"`).join(', ');
+const PROFILE_COLUMNS = PROFILE_FIELDS.map((f) => `prof.${camelToSnake(f)} AS "profile:${f}"`).join(', ');
 
 export interface BoardQuery {
   qty: number;

@@ -57,7 +57,11 @@ export async function updateLine(deps: Deps, auth: Auth, bomId: string, lineId: 
   const { version, ...changes } = body;
   const current = (await scoped(trx, 'bom_lines', auth.workspaceId).andWhere({ id: lineId, bomId }).first()) as LineRow | undefined;
   if (!current) throw errors.notFound('line');
-  await checkLineRefs(trx, auth.workspaceId, [{ partId: changes.partId !== undefined ? changes.partId : current.partId, pinnedQuoteId: changes.pinnedQuoteId !== undefined ? changes.pinnedQuoteId : current.pinnedQuoteId }]);
+  // The part and the pinned quote are checked only when one of them changes: an edit of
+  // anything else (a quantity, a note) leaves them as they were checked when set.
+  if (changes.partId !== undefined || changes.pinnedQuoteId !== undefined) {
+    await checkLineRefs(trx, auth.workspaceId, [{ partId: changes.partId !== undefined ? changes.partId : current.partId, pinnedQuoteId: changes.pinnedQuoteId !== undefined ? changes.pinnedQuoteId : current.pinnedQuoteId }]);
+  }
   const cols = lineColumns(changes);
   // Choosing a part resolves an imported line.
   if (changes.partId) cols.unresolved = null;

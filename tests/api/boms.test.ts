@@ -183,6 +183,13 @@ describe('BOMs, lines and the cost roll', () => {
     await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: foreign.id, qtyPerUnit: '1' }).expect(400);
     const line = (await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: partB.id, qtyPerUnit: '1' }).expect(201)).body;
     await ws.agents.buyer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ pinnedQuoteId: quoteA.id, version: line.version }).expect(400);
+    await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${line.id}`).send({ partId: foreign.id, version: line.version }).expect(400);
+    // A line pinned to part A's quote: its quantity may change, its part may not move to B
+    // while the pin stays (the pin is checked against the part the line would have).
+    const pinnedLine = (await ws.agents.designer.post(`/api/boms/${bom.id}/lines`).send({ partId: partA.id, qtyPerUnit: '1', pinnedQuoteId: quoteA.id }).expect(201)).body;
+    const moreOf = (await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${pinnedLine.id}`).send({ qtyPerUnit: '2', version: pinnedLine.version }).expect(200)).body;
+    const res = await ws.agents.designer.patch(`/api/boms/${bom.id}/lines/${pinnedLine.id}`).send({ partId: partB.id, version: moreOf.version }).expect(400);
+    expect(res.body.error.details[0].path).toBe('pinnedQuoteId');
   });
 
   it('a buyer may pin a quote on a line but not change its quantity', async () => {

@@ -175,7 +175,8 @@ describe('the quote board reads its profile', () => {
     const asked = await board({ profileId: second.id });
     expect(byDefault.profileId).toBe(first.id);
     expect(asked).toMatchObject({ profileId: second.id, profileName: expect.stringMatching(/^Profile /), dutyPct: '10' });
-    // Under FOB the buyer pays the import duty (Incoterms 2020): 10 % of the FOB value of
+    // Under FOB the buyer pays the import duty (Incoterms 2020, costing-facts table [INCO-ICCPA]);
+    // duty on the FOB basis is on the goods value (costing.md). 10 % of the FOB value of
     // 10,000 × USD 0.0020 = USD 20 is USD 2 with the second profile, nothing with the first.
     expect(byDefault.offers[0]).toMatchObject({ goodsValue: '20.000000', duty: '0.000000', landed: '20.000000' });
     expect(asked.offers[0]).toMatchObject({ goodsValue: '20.000000', duty: '2.000000', landed: '22.000000' });

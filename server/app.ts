@@ -25,6 +25,7 @@ import { routeTable } from './routes';
 import { createObjectStore, type ObjectStore } from './files/object-store';
 import type Stripe from 'stripe';
 import { createStripe } from './billing/stripe-client';
+import { recycleConnections } from './http/recycle-connections';
 
 export interface AppOptions {
   db: Knex;
@@ -84,6 +85,7 @@ export function createApp(opts: AppOptions): FarthingApp {
   // tag it cost more than a revalidation saves. Static files keep theirs (serve-static).
   app.disable('etag');
   if (config.PUBLIC_URL.startsWith('https://')) app.set('trust proxy', 1);
+  app.use(recycleConnections(config.MAX_REQUESTS_PER_CONNECTION));
   app.use(helmet());
   app.use(
     pinoHttp({

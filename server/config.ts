@@ -43,6 +43,13 @@ const schema = z.object({
    * web processes only (the jobs then run on another machine); set to `jobs`, one jobs process.
    */
   PROCESS_ROLE: z.enum(['all', 'web', 'jobs']).default('all'),
+  /**
+   * Requests one kept-alive connection may carry before the server closes it (the client
+   * reconnects at once). node:cluster shares out connections, not requests, so a client
+   * that holds its connections open stays on the processes it first landed on; a new
+   * connection goes to a process that is free to take it. 0: no limit.
+   */
+  MAX_REQUESTS_PER_CONNECTION: z.coerce.number().int().min(0).max(1_000_000).default(100),
 });
 
 export type Config = z.infer<typeof schema>;

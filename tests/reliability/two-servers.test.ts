@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { spawn, type ChildProcess } from 'node:child_process';
+import http from 'node:http';
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -110,10 +111,10 @@ describe('two servers side by side', () => {
     await expect.poll(onB, { timeout: 10_000 }).toBe('0.0070000000');
   });
 
-  it('PROCESS_ROLE=web under several processes runs web processes only (the jobs run elsewhere)', async () => {
+  it('PROCESS_ROLE=web under several processes runs web processes only (the jobs run elsewhere); a client that keeps its connection open is served by both, its connection closed every third request', async () => {
     const port = await freePort();
     const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PROCESS_ROLE: 'web', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false' },
+      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PROCESS_ROLE: 'web', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false', MAX_REQUESTS_PER_CONNECTION: '3' },
       stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
     });
     let logged = '';
@@ -127,6 +128,24 @@ describe('two servers side by side', () => {
       expect(readFileSync(`/proc/${proc.pid}/task/${proc.pid}/children`, 'utf8').split(' ').filter(Boolean)).toHaveLength(2);
       await request(`http://127.0.0.1:${port}`).get('/api/auth/me').expect(401);
       expect(logged).not.toMatch(/background jobs are running/);
+
+      // Twelve requests in turn over a kept-alive connection: node:cluster gives each new
+      // connection to a process, so the four connections reach both web processes.
+      const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
+      const marker = `/api/auth/me?keep-alive-check`;
+      const closes: (string | undefined)[] = [];
+      for (let i = 0; i < 12; i++) {
+        closes.push(await new Promise((resolve, reject) => {
+          http.get({ host: '127.0.0.1', port, path: marker, agent }, (res) => {
+            res.resume();
+            res.on('end', () => resolve(res.headers.connection));
+          }).on('error', reject);
+        }));
+      }
+      agent.destroy();
+      expect(closes.filter((c) => c === 'close')).toHaveLength(4);
+      const answeredBy = async () => new Set(logged.split('\n').filter((l) => l.includes(marker)).map((l) => (JSON.parse(l) as { pid: number }).pid));
+      await expect.poll(async () => (await answeredBy()).size).toBe(2);
     } finally {
       proc.kill('SIGTERM');
       await new Promise((r) => proc.once('exit', r));

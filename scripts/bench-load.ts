@@ -151,7 +151,7 @@ async function main() {
       const summary = {
         run, seconds, connections, totalRequests: outs.reduce((n, o) => n + o.requests, 0),
         throughputPerSec: outs.reduce((n, o) => n + o.throughputPerSec, 0), errors: outs.reduce((n, o) => n + o.errors, 0),
-        serverRssMb: Math.round(app.rssMb()), serverProcesses: app.processes(), linesSecondPagesNotLast: lastPageMissed, routes: outs,
+        serverRssMb: Math.round(app.rssMb()), serverRssByRoleMb: app.rssByRoleMb(), serverProcesses: app.processes(), linesSecondPagesNotLast: lastPageMissed, routes: outs,
       };
       console.log(JSON.stringify(summary));
       results.push(summary);

@@ -19,6 +19,8 @@ export interface BenchApp {
   signIn(email: string): Promise<string>;
   /** Resident memory of the server's processes together, in MB. */
   rssMb(): number;
+  /** The same, process by process, by role (the primary, then `web` and `jobs`). */
+  rssByRoleMb(): Record<string, number[]>;
   processes(): number;
   stop(): Promise<void>;
 }
@@ -84,6 +86,14 @@ export async function startBenchApp(opts: { database: string; port: number; env?
       return (login.headers.get('set-cookie') ?? '').split(';')[0];
     },
     rssMb: () => [child.pid!, ...childrenOf(child.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0),
+    rssByRoleMb: () => {
+      const out: Record<string, number[]> = { primary: [Math.round(rssOf(child.pid!))] };
+      for (const pid of childrenOf(child.pid!)) {
+        const role = /(?:^|\0)PROCESS_ROLE=(\w+)/.exec(readFileSync(`/proc/${pid}/environ`, 'utf8'))?.[1] ?? 'all';
+        (out[role] ??= []).push(Math.round(rssOf(pid)));
+      }
+      return out;
+    },
     processes: () => childrenOf(child.pid!).length || 1,
     stop: async () => {
       if (child.exitCode === null && child.signalCode === null) {

@@ -12,6 +12,8 @@ import { startBenchApp } from './lib/bench-app';
 
 const seconds = Math.min(60, Number(process.env.LOAD_SECONDS ?? 20));
 const connections = Number(process.env.LOAD_CONNECTIONS ?? 50);
+// The server's MAX_REQUESTS_PER_CONNECTION (its default unless set), given to it and to autocannon.
+const maxPerConnection = Number(process.env.MAX_REQUESTS_PER_CONNECTION ?? 100);
 
 async function main() {
   let bomId = '';
@@ -20,6 +22,7 @@ async function main() {
   const app = await startBenchApp({
     database: 'farthing_load',
     port: Number(process.env.LOAD_PORT ?? 4180),
+    env: { MAX_REQUESTS_PER_CONNECTION: String(maxPerConnection) },
     // A generated 1,000-line BOM over the demo library.
     prepare: async (db) => {
       const ws = await db('workspaces').where('name', 'like', 'Tinbell%').first('id');
@@ -112,10 +115,11 @@ async function main() {
     // LOAD_SKIP="PATCH /api/boms/:id/lines/:lineId" leaves one route out (its connections idle).
     const skip = process.env.LOAD_SKIP;
     if (skip) routes.splice(0, routes.length, ...routes.filter((r) => r.name !== skip));
-    // The server closes a connection after this many requests (MAX_REQUESTS_PER_CONNECTION);
-    // a browser then opens a new one. autocannon does not: it writes its next request on the
-    // closing connection and times it from there, so it is told to reconnect at that count.
-    const reconnectRate = Number(process.env.MAX_REQUESTS_PER_CONNECTION ?? 100) || undefined;
+    // The server closes a connection after maxPerConnection requests; a browser then sends
+    // its next request on a new one. autocannon ignores the header: it writes its next request
+    // on the closing connection, where it is lost, and times every later answer on that
+    // client from the request before it. So it is told to reconnect at the same count.
+    const reconnectRate = maxPerConnection || undefined;
     const results: unknown[] = [];
     const drive = (duration: number) =>
       Promise.all(
@@ -140,7 +144,9 @@ async function main() {
       warmUp = { run: 'warm-up', seconds: warmUpSeconds, errors: outs.reduce((n, o) => n + o.errors, 0), routes: outs.map((o) => ({ route: o.route, p50Ms: o.p50Ms, p99Ms: o.p99Ms, errors: o.errors })) };
       console.log(JSON.stringify(warmUp));
     }
-    for (const run of [1, 2]) {
+    // LOAD_RUNS=5 runs more than the two the target compares, to follow memory over a longer soak.
+    const runs = Math.max(2, Number(process.env.LOAD_RUNS ?? 2));
+    for (let run = 1; run <= runs; run++) {
       await refreshVersions();
       lastPageMissed = 0;
       const outs = await drive(seconds);

@@ -87,10 +87,15 @@ export async function startBenchApp(opts: { database: string; port: number; env?
     },
     rssMb: () => [child.pid!, ...childrenOf(child.pid!)].reduce((mb, pid) => mb + rssOf(pid), 0),
     rssByRoleMb: () => {
+      // A single process (WEB_CONCURRENCY=1) does everything and is listed as the primary.
       const out: Record<string, number[]> = { primary: [Math.round(rssOf(child.pid!))] };
       for (const pid of childrenOf(child.pid!)) {
-        const role = /(?:^|\0)PROCESS_ROLE=(\w+)/.exec(readFileSync(`/proc/${pid}/environ`, 'utf8'))?.[1] ?? 'all';
-        (out[role] ??= []).push(Math.round(rssOf(pid)));
+        try {
+          const role = /(?:^|\0)PROCESS_ROLE=(\w+)/.exec(readFileSync(`/proc/${pid}/environ`, 'utf8'))?.[1] ?? 'all';
+          (out[role] ??= []).push(Math.round(rssOf(pid)));
+        } catch {
+          // A process replaced while it was read: left out.
+        }
       }
       return out;
     },

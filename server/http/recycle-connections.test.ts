@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import http from 'node:http';
+import net from 'node:net';
 import type { AddressInfo } from 'node:net';
 import express from 'express';
 import { recycleConnections } from './recycle-connections';
@@ -40,6 +41,32 @@ describe('recycling kept-alive connections', () => {
     expect(new Set(ports).size).toBe(3);
     expect(ports[0]).toBe(ports[2]);
     expect(ports[3]).not.toBe(ports[2]);
+  });
+
+  it('does not run a request pipelined behind the last one (its answer could not be sent): two answers, then the connection closes', async () => {
+    let ran = 0;
+    const app = express();
+    app.use(recycleConnections(2));
+    // Answers after a moment, as the app's handlers do (they wait for the database).
+    app.get('/', (_req, res) => {
+      ran++;
+      setTimeout(() => res.json({ ok: true }), 20);
+    });
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((r) => server.once('listening', r));
+    try {
+      const socket = net.connect((server.address() as AddressInfo).port, '127.0.0.1');
+      let received = '';
+      socket.on('data', (d) => (received += d.toString()));
+      // Three requests in one write, as a pipelining client sends them.
+      socket.write('GET / HTTP/1.1\r\nHost: x\r\n\r\n'.repeat(3));
+      await new Promise((r) => socket.once('close', r));
+      expect(received.match(/HTTP\/1\.1 200/g)).toHaveLength(2);
+      expect(received).toMatch(/Connection: close/i);
+      expect(ran).toBe(2);
+    } finally {
+      server.close();
+    }
   });
 
   it('keeps one connection for everything when turned off (0)', async () => {

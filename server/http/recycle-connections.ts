@@ -3,12 +3,13 @@ import type { NextFunction, Request, Response } from 'express';
 
 /**
  * Closes a kept-alive connection after `max` requests: the last answer says
- * `Connection: close`, and the client opens a new connection for its next request. Under
- * node:cluster a connection stays with the process that took it, so clients that keep
- * their connections open (browsers, scripts, load balancers) would otherwise stay spread
- * however they first landed; a new connection goes to a process free to take it, which
- * keeps the processes' shares of the work even. (Node's own `maxRequestsPerSocket` answers
- * 503 to a client that sends on regardless, so it is not used.) 0 turns it off.
+ * `Connection: close`, the server closes the connection once it is sent, and the client
+ * opens a new one for its next request. Under node:cluster a connection stays with the
+ * process that took it, so clients that keep their connections open (browsers, scripts, a
+ * proxy's pool) would otherwise stay spread however they first landed; each new connection
+ * goes to the next process in turn, so the processes' shares even out. Node's own
+ * `maxRequestsPerSocket` also says `Connection: close` but leaves the connection open and
+ * answers 503 to whatever is sent after it. 0 turns this off.
  */
 export function recycleConnections(max: number) {
   const served = new WeakMap<Socket, number>();
@@ -16,7 +17,11 @@ export function recycleConnections(max: number) {
     if (max > 0) {
       const n = (served.get(req.socket) ?? 0) + 1;
       served.set(req.socket, n);
-      if (n >= max) res.setHeader('Connection', 'close');
+      // A request pipelined behind the last one is left alone: Node drops whatever is queued
+      // behind an answer that closes the connection, so it would run with its answer lost.
+      // The client sends it again on its new connection.
+      if (n > max) return;
+      if (n === max) res.setHeader('Connection', 'close');
     }
     next();
   };

@@ -114,7 +114,7 @@ describe('two servers side by side', () => {
   it('PROCESS_ROLE=web under several processes runs web processes only (the jobs run elsewhere); a client that keeps its connection open is served by both, its connection closed every third request', async () => {
     const port = await freePort();
     const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PROCESS_ROLE: 'web', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false', MAX_REQUESTS_PER_CONNECTION: '3' },
+      env: { ...process.env, ...env, WEB_CONCURRENCY: '2', PROCESS_ROLE: 'web', PORT: String(port), NODE_ENV: 'test', LOG_LEVEL: 'info', SERVE_CLIENT: 'false', MAX_REQUESTS_PER_CONNECTION: '3', NODE_CLUSTER_SCHED_POLICY: 'rr' },
       stdio: ['ignore', 'pipe', 'pipe', 'ipc'],
     });
     let logged = '';
@@ -131,18 +131,22 @@ describe('two servers side by side', () => {
 
       // Twelve requests in turn over a kept-alive connection: node:cluster gives each new
       // connection to a process, so the four connections reach both web processes.
+      // (node:cluster's round-robin, Linux's default, pinned: it gives connections in turn.)
       const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
       const marker = `/api/auth/me?keep-alive-check`;
       const closes: (string | undefined)[] = [];
-      for (let i = 0; i < 12; i++) {
-        closes.push(await new Promise((resolve, reject) => {
-          http.get({ host: '127.0.0.1', port, path: marker, agent }, (res) => {
-            res.resume();
-            res.on('end', () => resolve(res.headers.connection));
-          }).on('error', reject);
-        }));
+      try {
+        for (let i = 0; i < 12; i++) {
+          closes.push(await new Promise((resolve, reject) => {
+            http.get({ host: '127.0.0.1', port, path: marker, agent }, (res) => {
+              res.resume();
+              res.on('end', () => resolve(res.headers.connection));
+            }).on('error', reject);
+          }));
+        }
+      } finally {
+        agent.destroy();
       }
-      agent.destroy();
       expect(closes.filter((c) => c === 'close')).toHaveLength(4);
       const answeredBy = async () => new Set(logged.split('\n').filter((l) => l.includes(marker)).map((l) => (JSON.parse(l) as { pid: number }).pid));
       await expect.poll(async () => (await answeredBy()).size).toBe(2);

@@ -44,10 +44,10 @@ const schema = z.object({
    */
   PROCESS_ROLE: z.enum(['all', 'web', 'jobs']).default('all'),
   /**
-   * Requests one kept-alive connection may carry before the server closes it (the client
-   * reconnects at once). node:cluster shares out connections, not requests, so a client
-   * that holds its connections open stays on the processes it first landed on; each new
-   * connection goes to the next process in turn. 0: no limit.
+   * Requests one kept-alive connection may carry before the server closes it, at its next
+   * GET or HEAD (the client reconnects at once). node:cluster shares out connections, not
+   * requests, so a client that holds its connections open stays on the processes it first
+   * landed on; each new connection goes to the next process in turn. 0: no limit.
    */
   MAX_REQUESTS_PER_CONNECTION: z.coerce.number().int().min(0).max(1_000_000).default(100),
 });

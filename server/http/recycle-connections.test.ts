@@ -6,10 +6,10 @@ import express from 'express';
 import { recycleConnections } from './recycle-connections';
 
 /** Sends `count` requests one after another on a keep-alive agent with one socket. */
-async function sendInTurn(max: number, count: number) {
+async function sendInTurn(max: number, count: number, methodOf: (i: number) => string = () => 'GET') {
   const app = express();
   app.use(recycleConnections(max));
-  app.get('/', (_req, res) => res.json({ ok: true }));
+  app.all('/', (_req, res) => res.json({ ok: true }));
   const server = app.listen(0, '127.0.0.1');
   await new Promise((r) => server.once('listening', r));
   const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
@@ -18,11 +18,14 @@ async function sendInTurn(max: number, count: number) {
     for (let i = 0; i < count; i++) {
       answers.push(
         await new Promise((resolve, reject) => {
-          http.get({ host: '127.0.0.1', port: (server.address() as AddressInfo).port, path: '/', agent }, (res) => {
+          const body = methodOf(i) === 'GET' ? undefined : '{"a":1}';
+          const req = http.request({ host: '127.0.0.1', port: (server.address() as AddressInfo).port, path: '/', agent, method: methodOf(i), headers: body ? { 'content-type': 'application/json' } : {} }, (res) => {
             const localPort = res.socket?.localPort;
             res.resume();
             res.on('end', () => resolve({ connection: res.headers.connection, localPort }));
-          }).on('error', reject);
+          });
+          req.on('error', reject);
+          req.end(body);
         }),
       );
     }
@@ -67,6 +70,11 @@ describe('recycling kept-alive connections', () => {
     } finally {
       server.close();
     }
+  });
+
+  it('closes only after a request without a body: edits and uploads are answered on an open connection', async () => {
+    const answers = await sendInTurn(2, 5, (i) => (i < 3 ? 'POST' : 'GET'));
+    expect(answers.map((a) => a.connection)).toEqual(['keep-alive', 'keep-alive', 'keep-alive', 'close', 'keep-alive']);
   });
 
   it('keeps one connection for everything when turned off (0)', async () => {

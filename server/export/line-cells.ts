@@ -129,6 +129,13 @@ const MONEY_TOLERANCE = new Dec('0.000001');
  * freight with its share, the fees share, assembly): each may be off by half a unit.
  */
 const LANDED_TOLERANCE = new Dec('0.000003');
+/**
+ * The customs value adds up to four of the line's figures. The freight among them is the
+ * engine's figure rounded to 6 decimals (its per-shipment share is taken from it), the
+ * insurance is figured on that freight, and the engine rounds the customs value itself: so
+ * the sum may be off by half a unit for each term and half a unit more.
+ */
+const customsTolerance = (terms: number) => new Dec('0.0000005').times(terms + 1);
 /** Converted unit prices have 10 decimals. */
 const PRICE_TOLERANCE = new Dec('0.000000001');
 const INSURED_SHARE = '1.1';
@@ -309,14 +316,17 @@ export function lineRow(input: LineInput, profile: PreparedProfile, refs: SheetR
   const terms = customsTerms(incoterm, profile.dutyBasis);
   const parts: Record<string, Dec> = { goods: G, origin: O, freight: F, insurance: I };
   let CV = ZERO;
+  let cvTolerance = ZERO;
   if (terms && line.customsValue !== null) {
-    CV = formulaCell('customsValue', terms.map(at).join('+'), terms.reduce((s, k) => s.plus(parts[k]), ZERO), dec(line.customsValue));
+    cvTolerance = customsTolerance(terms.length);
+    CV = formulaCell('customsValue', terms.map(at).join('+'), terms.reduce((s, k) => s.plus(parts[k]), ZERO), dec(line.customsValue), cvTolerance);
   } else if (line.customsValue !== null) {
     CV = engineValue('customsValue', dec(line.customsValue));
   }
   const dutyPct = needs('duty') && line.customsValue !== null ? dec(line.dutyPct ?? '0').div(100) : ZERO;
   cells.dutyPct = dutyPct.toNumber();
-  const D = formulaCell('duty', `${at('dutyPct')}*${at('customsValue')}`, dutyPct.times(CV), dec(line.duty));
+  // The duty carries the customs value's leeway at its rate.
+  const D = formulaCell('duty', `${at('dutyPct')}*${at('customsValue')}`, dutyPct.times(CV), dec(line.duty), MONEY_TOLERANCE.plus(dutyPct.times(cvTolerance)));
 
   const fees = dec(line.fees);
   cells.fees = fees.toNumber();

@@ -46,6 +46,10 @@ describe('recycling kept-alive connections', () => {
     expect(ports[3]).not.toBe(ports[2]);
   });
 
+  // RFC 9112 §9.6 (earlier RFC 7230 §6.6): a server that sends "close" closes the connection
+  // after that answer and does not process further requests received on it (the server's
+  // side from memory; the client's side, "SHOULD NOT assume that they will be processed",
+  // looked up).
   it('does not run a request pipelined behind the last one (its answer could not be sent): two answers, then the connection closes', async () => {
     let ran = 0;
     const app = express();

@@ -135,7 +135,8 @@ const LANDED_TOLERANCE = new Dec('0.000003');
  * insurance is figured on that freight, and the engine rounds the customs value itself: so
  * the sum may be off by half a unit for each term and half a unit more.
  */
-const customsTolerance = (terms: number) => new Dec('0.0000005').times(terms + 1);
+const HALF_UNIT = new Dec('0.0000005');
+const customsTolerance = (terms: number) => HALF_UNIT.times(terms + 1);
 /** Converted unit prices have 10 decimals. */
 const PRICE_TOLERANCE = new Dec('0.000000001');
 const INSURED_SHARE = '1.1';
